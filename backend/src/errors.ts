@@ -38,7 +38,7 @@ export class ConflictError extends AppError {
 }
 export class TooManyAttemptsError extends AppError {
   constructor(readonly retryAfterSeconds: number) {
-    super(429, 'too_many_attempts', `Too many attempts. Try again in ${retryAfterSeconds} seconds.`, undefined, {
+    super(429, 'too_many_attempts', `Too many attempts. Try again in ${retryAfterSeconds} second${retryAfterSeconds === 1 ? '' : 's'}.`, undefined, {
       'Retry-After': String(retryAfterSeconds),
     });
   }

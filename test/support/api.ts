@@ -12,6 +12,12 @@ import { createSmtpMailer } from '../../backend/src/mail/mailer.js';
 
 export const TEST_ORIGIN = 'http://ferrule.test';
 
+/** Each test file speaks from an address of its own, so per-address slowing in one file leaves the others alone. */
+export const TEST_ADDRESS = `10.${rand()}.${rand()}.${rand()}`;
+function rand(): number {
+  return Math.floor(Math.random() * 254) + 1;
+}
+
 export interface TestServer {
   ctx: AppContext;
   app: Express;
@@ -29,6 +35,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     PUBLIC_BASE_URL: TEST_ORIGIN,
     SESSION_SECRET: 'test-secret-that-is-long-enough-for-ferrule',
     SMTP_URL: `smtp://127.0.0.1:${catcher.port}?ignoreTLS=true`,
+    TRUST_PROXY: 'loopback',
     ...env,
   });
   const ds = createDataSource(config.databaseUrl, { poolSize: 5 });
@@ -50,8 +57,8 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
 /** A request as Ferrule's own pages send it: our Origin, and the session cookie when given. */
-export function call(app: Express, method: Method, path: string, cookie?: string): Test {
-  const req = request(app)[method](path).set('Origin', TEST_ORIGIN);
+export function call(app: Express, method: Method, path: string, cookie?: string, address = TEST_ADDRESS): Test {
+  const req = request(app)[method](path).set('Origin', TEST_ORIGIN).set('X-Forwarded-For', address);
   return cookie ? req.set('Cookie', cookie) : req;
 }
 

@@ -4,6 +4,7 @@ import { LinkToken } from '../entities/index.js';
 import type { LinkTokenPurpose } from '../entities/link-token.entity.js';
 import { ValidationError } from '../errors.js';
 import { newToken, sha256 } from '../lib/crypto.js';
+import { returnedRows } from '../lib/sql.js';
 
 export const LINK_LIFETIME_MINUTES: Record<LinkTokenPurpose, number> = { invite: 72 * 60, reset: 60 };
 
@@ -24,9 +25,11 @@ export async function issueLinkToken(ctx: AppContext, manager: EntityManager, us
 /** Uses a token once, in the caller's transaction; every other outstanding token of the user is withdrawn too. */
 export async function consumeLinkToken(ctx: AppContext, manager: EntityManager, token: string, purpose: LinkTokenPurpose): Promise<string> {
   const now = ctx.clock.now();
-  const rows: Array<{ user_id: string }> = await manager.query(
-    `UPDATE link_tokens SET used_at = $3 WHERE token_hash = $1 AND purpose = $2 AND used_at IS NULL AND expires_at > $3 RETURNING user_id`,
-    [sha256(token), purpose, now],
+  const rows = returnedRows<{ user_id: string }>(
+    await manager.query(
+      `UPDATE link_tokens SET used_at = $3 WHERE token_hash = $1 AND purpose = $2 AND used_at IS NULL AND expires_at > $3 RETURNING user_id`,
+      [sha256(token), purpose, now],
+    ),
   );
   const userId = rows[0]?.user_id;
   if (!userId) throw new ValidationError('This link has expired or has already been used. Ask for a new one.', 'token', 'invalid_token');
