@@ -17,6 +17,28 @@ export const PERMISSIONS = {
   'users.reactivate': ['administrator'],
   'users.resend-invite': ['administrator'],
   'audit.read': ['administrator'],
+
+  'register.read': ['administrator', 'reliability_engineer', 'technician', 'safety_officer', 'viewer'],
+  'sites.create': ['administrator'],
+  'sites.update': ['administrator'],
+  'areas.edit': ['administrator', 'reliability_engineer'],
+  'equipment.edit': ['administrator', 'reliability_engineer'],
+  'service-settings.update': ['administrator', 'reliability_engineer'],
+  'constructions.edit': ['administrator', 'reliability_engineer'],
+  'fitting-types.edit': ['administrator', 'reliability_engineer'],
+  'positions.edit': ['administrator', 'reliability_engineer'],
+  'removal-outcomes.update': ['administrator', 'reliability_engineer'],
+
+  'assemblies.build': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.proof-test': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.install': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.replace': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.tag-out': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.remove': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.return-to-stock': ['administrator', 'reliability_engineer', 'technician'],
+  'assemblies.scrap': ['administrator', 'reliability_engineer', 'technician'],
+  'checks.override': ['administrator', 'reliability_engineer'],
+  'events.void': ['administrator', 'reliability_engineer'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -452,9 +452,10 @@ describe('proof test (RMA IP-2: usually 50 % of minimum burst; ISO 8331: each as
     expect(r.overridable).toBe(false);
   });
 
-  it('warns when no proof test is recorded', () => {
+  it('fails, not overridable, when no proof test is recorded (ISO 8331: every assembly is proof-tested)', () => {
     const r = checkProofTest(inputWith({ assembly: { proofTest: null } }));
-    expect(r.outcome).toBe('warn');
+    expect(r.outcome).toBe('fail');
+    expect(r.overridable).toBe(false);
     expect(r.sentence).toMatch(/^No proof test is recorded/);
   });
 
@@ -623,9 +624,11 @@ describe('runSelectionChecks', () => {
       assembly: { hoseManufacturedOn: null, builtOn: null, proofTest: null },
     };
     const summary = runSelectionChecks(empty, { now: NOW });
-    for (const r of summary.results) expect(r.outcome, r.check).toBe('warn');
-    expect(summary.outcome).toBe('warn');
-    expect(summary.blocksInstall).toBe(false);
+    // A missing proof test is the one gap that fails: it blocks until the assembly is tested.
+    for (const r of summary.results) expect(r.outcome, r.check).toBe(r.check === 'proof-test' ? 'fail' : 'warn');
+    expect(summary.outcome).toBe('fail');
+    expect(summary.blocksInstall).toBe(true);
+    expect(summary.allFailsOverridable).toBe(false);
   });
 
   it('takes the worst outcome', () => {

@@ -1,3 +1,4 @@
+import type { LengthUnit, PressureUnit, TemperatureUnit } from '../../../shared/src/units/units.js';
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
 /** A plant, mine or quarry: the unit of access. */
@@ -15,6 +16,18 @@ export class Site {
 
   @Column({ name: 'time_zone', type: 'text', default: 'UTC' })
   timeZone: string;
+
+  /** Units for labels and reports at this site. */
+  @Column({ name: 'default_units', type: 'jsonb', default: () => `'{"lengthUnit": "mm", "pressureUnit": "bar", "temperatureUnit": "C"}'` })
+  defaultUnits: { pressureUnit: PressureUnit; lengthUnit: LengthUnit; temperatureUnit: TemperatureUnit };
+
+  /** ISO 4217 code of costs recorded at this site. */
+  @Column({ type: 'text', default: 'GBP' })
+  currency: string;
+
+  /** The compressed-air restraint rule sets the site follows. */
+  @Column({ name: 'rule_set_codes', type: 'text', array: true, default: () => "'{}'" })
+  ruleSetCodes: string[];
 
   @Column({ name: 'archived_at', type: 'timestamptz', nullable: true })
   archivedAt: Date | null;

@@ -424,9 +424,10 @@ export function checkProofTest(input: SelectionCheckInput, options: SelectionChe
   const source = [SOURCES.proofTestEach, SOURCES.proofTest];
   const test = input.assembly.proofTest;
   if (!test) {
+    // A missing test blocks like a failed one: the only way past it is a test.
     return result(
       'proof-test',
-      'warn',
+      'fail',
       'No proof test is recorded for this assembly. Proof-test it after the fittings are attached, before it goes into service.',
       source,
     );
