@@ -3,14 +3,17 @@ import { ROLES } from '../../shared/src/roles.js';
 import { ROUTES } from '../../backend/src/routes/registry.js';
 import { call, startTestServer } from '../support/api.js';
 import { buildSite, buildUser, signIn } from '../support/factories.js';
+import { ASSEMBLY_EXPECTATIONS } from './matrix/assemblies.js';
+import { CATALOGUE_EXPECTATIONS } from './matrix/catalogue.js';
 import { FOUNDATION_EXPECTATIONS } from './matrix/foundation.js';
+import { REGISTER_EXPECTATIONS } from './matrix/register.js';
 import type { Expectations, Fixtures, Prepared } from './matrix/types.js';
 
 /**
  * Every route of the registry with the status each kind of caller gets: no session, each role
  * (with access to all sites), and a user whose sites do not include the record.
  */
-const EXPECTATIONS: Expectations = { ...FOUNDATION_EXPECTATIONS };
+const EXPECTATIONS: Expectations = { ...FOUNDATION_EXPECTATIONS, ...REGISTER_EXPECTATIONS, ...CATALOGUE_EXPECTATIONS, ...ASSEMBLY_EXPECTATIONS };
 
 let fx: Fixtures;
 beforeAll(async () => {

@@ -4,12 +4,15 @@ import { NotFoundError } from '../errors.js';
 import { actorOf, authenticate } from '../middleware/authenticate.js';
 import { validate, type Parsed } from '../middleware/validate.js';
 import { authorize } from '../policies/authorize.js';
+import { assemblyRoutes } from './assemblies.router.js';
 import { authRoutes } from './auth.router.js';
+import { catalogueRoutes } from './catalogue.router.js';
+import { registerRoutes } from './register.router.js';
 import type { RouteDef } from './route.js';
 import { userRoutes } from './users.router.js';
 
 /** Every API route in one list: the routers are built from it and the route × role matrix test reads it. */
-export const ROUTES: readonly RouteDef[] = [...authRoutes, ...userRoutes];
+export const ROUTES: readonly RouteDef[] = [...authRoutes, ...userRoutes, ...registerRoutes, ...catalogueRoutes, ...assemblyRoutes];
 
 export function buildApiRouter(ctx: AppContext): Router {
   const router = Router();
