@@ -1,0 +1,4 @@
+export const siteKeys = {
+  all: ['sites'] as const,
+  list: () => [...siteKeys.all, 'list'] as const,
+};

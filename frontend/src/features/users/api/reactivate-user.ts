@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UserDto } from '@shared/schemas/users.schema';
+import { api } from '@/lib/api-client';
+import { userKeys } from './user-keys';
+
+export function reactivateUser(id: string): Promise<UserDto> {
+  return api.post<{ data: UserDto }>(`/api/users/${encodeURIComponent(id)}/reactivate`).then((body) => body.data);
+}
+
+export function useReactivateUser({ onSuccess }: { onSuccess?: (user: UserDto) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: reactivateUser,
+    onSuccess: (user) => {
+      queryClient.setQueryData(userKeys.detail(user.id), user);
+      void queryClient.invalidateQueries({ queryKey: userKeys.lists() });
+      void queryClient.invalidateQueries({ queryKey: userKeys.counts() });
+      onSuccess?.(user);
+    },
+  });
+}
