@@ -9,6 +9,11 @@ export class AppError extends Error {
   ) {
     super(message);
   }
+
+  /** More for the client to show, e.g. every check result behind a refused install. */
+  details(): Record<string, unknown> | undefined {
+    return undefined;
+  }
 }
 
 export class ValidationError extends AppError {

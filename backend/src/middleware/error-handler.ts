@@ -11,7 +11,8 @@ interface HttpParserError {
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (err instanceof AppError) {
-      res.set(err.headers).status(err.status).json({ error: { code: err.code, message: err.message, ...(err.field ? { field: err.field } : {}) } });
+      const details = err.details();
+      res.set(err.headers).status(err.status).json({ error: { code: err.code, message: err.message, ...(err.field ? { field: err.field } : {}), ...(details ? { details } : {}) } });
       return;
     }
     const parser = err as HttpParserError;

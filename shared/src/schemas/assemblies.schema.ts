@@ -267,6 +267,21 @@ export interface AssemblyEventDto {
   voidedBy: { eventId: string; reason: string; at: string } | null;
 }
 
+/** One assembly's time at a position: when it went in and out, days in service and hours where the meter was read. */
+export interface PositionLifeDto {
+  assemblyId: string;
+  assemblyNumber: string;
+  constructionCode: string;
+  installedAt: string;
+  installedAtEstimated: boolean;
+  removedAt: string | null;
+  daysInService: number;
+  hoursInService: number | null;
+  removalReason: string | null;
+  lifeOutcome: 'failure' | 'suspension' | null;
+  current: boolean;
+}
+
 /** Cautions every removal and replacement shows before it is confirmed. */
 export const REMOVAL_CAUTIONS: readonly string[] = [
   'Isolate the supply, lock it out under the site’s lockout procedure, and bleed the line down to zero before you disconnect anything.',
