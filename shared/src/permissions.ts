@@ -39,6 +39,8 @@ export const PERMISSIONS = {
   'assemblies.scrap': ['administrator', 'reliability_engineer', 'technician'],
   'checks.override': ['administrator', 'reliability_engineer'],
   'events.void': ['administrator', 'reliability_engineer'],
+  'imports.run': ['administrator', 'reliability_engineer'],
+  'register.export': ['administrator', 'reliability_engineer', 'technician', 'safety_officer', 'viewer'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof PERMISSIONS;

@@ -5,6 +5,7 @@ import { call, startTestServer } from '../support/api.js';
 import { buildSite, buildUser, signIn } from '../support/factories.js';
 import { ASSEMBLY_EXPECTATIONS } from './matrix/assemblies.js';
 import { CATALOGUE_EXPECTATIONS } from './matrix/catalogue.js';
+import { CSV_EXPECTATIONS } from './matrix/csv.js';
 import { FOUNDATION_EXPECTATIONS } from './matrix/foundation.js';
 import { REGISTER_EXPECTATIONS } from './matrix/register.js';
 import type { Expectations, Fixtures, Prepared } from './matrix/types.js';
@@ -13,7 +14,7 @@ import type { Expectations, Fixtures, Prepared } from './matrix/types.js';
  * Every route of the registry with the status each kind of caller gets: no session, each role
  * (with access to all sites), and a user whose sites do not include the record.
  */
-const EXPECTATIONS: Expectations = { ...FOUNDATION_EXPECTATIONS, ...REGISTER_EXPECTATIONS, ...CATALOGUE_EXPECTATIONS, ...ASSEMBLY_EXPECTATIONS };
+const EXPECTATIONS: Expectations = { ...FOUNDATION_EXPECTATIONS, ...REGISTER_EXPECTATIONS, ...CATALOGUE_EXPECTATIONS, ...CSV_EXPECTATIONS, ...ASSEMBLY_EXPECTATIONS };
 
 let fx: Fixtures;
 beforeAll(async () => {
@@ -26,6 +27,10 @@ async function send(method: string, prepared: Prepared, cookie?: string) {
   const m = method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
   let req = call(fx.server.app, m, prepared.path, cookie);
   if (prepared.query) req = req.query(prepared.query);
+  if (prepared.file) {
+    for (const [name, value] of Object.entries((prepared.body ?? {}) as Record<string, string>)) req = req.field(name, value);
+    return req.attach(prepared.file.field, Buffer.from(prepared.file.content), prepared.file.name);
+  }
   if (prepared.body !== undefined) req = req.send(prepared.body as object);
   return req;
 }

@@ -9,6 +9,7 @@ import { Construction } from './construction.entity.js';
 import { Equipment } from './equipment.entity.js';
 import { FittingType } from './fitting-type.entity.js';
 import { IdempotencyRecord } from './idempotency-record.entity.js';
+import { ImportJob } from './import-job.entity.js';
 import { LinkToken } from './link-token.entity.js';
 import { Position } from './position.entity.js';
 import { Session } from './session.entity.js';
@@ -28,6 +29,7 @@ export {
   Equipment,
   FittingType,
   IdempotencyRecord,
+  ImportJob,
   LinkToken,
   Position,
   Session,
@@ -48,6 +50,7 @@ export const ENTITIES = [
   Equipment,
   FittingType,
   IdempotencyRecord,
+  ImportJob,
   LinkToken,
   Position,
   Session,

@@ -28,6 +28,8 @@ export interface RouteDef {
   schemas?: RequestSchemas;
   /** Only answered in demo mode. */
   demoOnly?: boolean;
+  /** A multipart upload of one file under `field`, at most `maxBytes`; it arrives as `req.file`. */
+  upload?: { field: string; maxBytes: number };
   handler: (input: HandlerInput) => Promise<void> | void;
 }
 

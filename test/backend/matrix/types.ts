@@ -14,6 +14,8 @@ export interface Prepared {
   path: string;
   body?: unknown;
   query?: Record<string, string>;
+  /** A multipart upload: the file under `field`, and `body`'s entries as text fields. */
+  file?: { field: string; name: string; content: string };
 }
 
 /**

@@ -1,0 +1,3 @@
+import type { RouteDef } from './route.js';
+
+export const csvRoutes: RouteDef[] = [];

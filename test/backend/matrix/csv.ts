@@ -1,0 +1,3 @@
+import type { Expectations } from './types.js';
+
+export const CSV_EXPECTATIONS: Expectations = {};
