@@ -5,12 +5,17 @@ import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import { aptInstall, fail, isRoot, say } from './setup.mjs';
 
+/** Where Debian puts each PostgreSQL version's programs; FERRULE_PG_SEARCH_ROOT moves it (to try the missing-server path). */
+const SEARCH_ROOT = process.env.FERRULE_PG_SEARCH_ROOT ?? '/usr/lib/postgresql';
+
 function standardBinDirs() {
   const found = [];
-  const pgConfig = spawnSync('pg_config', ['--bindir'], { encoding: 'utf8' });
-  if (pgConfig.status === 0) found.push(pgConfig.stdout.trim());
-  if (existsSync('/usr/lib/postgresql')) {
-    for (const v of readdirSync('/usr/lib/postgresql').sort((a, b) => Number(b) - Number(a))) found.push(`/usr/lib/postgresql/${v}/bin`);
+  if (!process.env.FERRULE_PG_SEARCH_ROOT) {
+    const pgConfig = spawnSync('pg_config', ['--bindir'], { encoding: 'utf8' });
+    if (pgConfig.status === 0) found.push(pgConfig.stdout.trim());
+  }
+  if (existsSync(SEARCH_ROOT)) {
+    for (const v of readdirSync(SEARCH_ROOT).sort((a, b) => Number(b) - Number(a))) found.push(`${SEARCH_ROOT}/${v}/bin`);
   }
   return found.filter((d) => existsSync(join(d, 'initdb')) && existsSync(join(d, 'pg_ctl')));
 }
@@ -26,7 +31,7 @@ export function findPgBin() {
   if (dirs.length === 0) {
     aptInstall(['postgresql'], 'The PostgreSQL server');
     dirs = standardBinDirs();
-    if (dirs.length === 0) fail('PostgreSQL was installed but initdb and pg_ctl were not found under /usr/lib/postgresql/*/bin.');
+    if (dirs.length === 0) fail(`PostgreSQL was installed but initdb and pg_ctl were not found under ${SEARCH_ROOT}/*/bin.`);
   }
   return dirs[0];
 }

@@ -1,11 +1,22 @@
 import { z } from 'zod';
-import { ELECTRICAL_PROPERTIES, REINFORCEMENTS, type CheckOutcome } from '../checks/types.js';
-import { TUBE_COMPOUNDS } from '../checks/compatibility.js';
+import { ELECTRICAL_PROPERTIES, REINFORCEMENTS, type CheckOutcome, type ElectricalProperty, type Reinforcement } from '../checks/types.js';
+import { TUBE_COMPOUNDS, type CompatibilityRating, type CompatibilityTable, type Medium, type TubeCompound } from '../checks/compatibility.js';
 import { MEDIA } from '../checks/compatibility.js';
-import { CRITICALITY_LEVELS } from '../services/criticality.js';
-import { CONDUCTIVITY_REQUIREMENTS, PERIODIC_TEST_KINDS, SERVICE_CODES } from '../services/service-catalogue.js';
-import { SIZE_CLASS_CODES } from '../sizes/nominal-sizes.js';
-import { LENGTH_UNITS, lengthInput, PRESSURE_UNITS, pressureInput, TEMPERATURE_UNITS, temperatureInput } from '../units/units.js';
+import { CRITICALITY_LEVELS, type CriticalityDefinition } from '../services/criticality.js';
+import type { RemovalReasonDefinition } from '../services/removal-reasons.js';
+import { CONDUCTIVITY_REQUIREMENTS, PERIODIC_TEST_KINDS, SERVICE_CODES, type ServiceDefinition } from '../services/service-catalogue.js';
+import { SIZE_CLASS_CODES, type SizeClass } from '../sizes/nominal-sizes.js';
+import {
+  LENGTH_UNITS,
+  lengthInput,
+  PRESSURE_UNITS,
+  pressureInput,
+  TEMPERATURE_UNITS,
+  temperatureInput,
+  type LengthUnit,
+  type PressureUnit,
+  type TemperatureUnit,
+} from '../units/units.js';
 import { pageQuerySchema, uuidSchema } from './common.schema.js';
 
 /** Limits of free text in the register. */
@@ -63,6 +74,7 @@ function isTimeZone(value: string): boolean {
 export const areaCreateSchema = z.strictObject({ siteId: uuidSchema, code: codeSchema('Area code'), name: nameSchema('Area name') });
 export const areaUpdateSchema = areaCreateSchema.omit({ siteId: true }).partial();
 export type AreaCreateInput = z.infer<typeof areaCreateSchema>;
+export type AreaUpdateInput = z.infer<typeof areaUpdateSchema>;
 
 export const equipmentCreateSchema = z.strictObject({
   areaId: uuidSchema,
@@ -70,8 +82,10 @@ export const equipmentCreateSchema = z.strictObject({
   name: nameSchema('Equipment name'),
   hasHourMeter: z.boolean().default(false),
 });
-export const equipmentUpdateSchema = equipmentCreateSchema.partial();
+// No defaults in an update: a field left out stays as it is.
+export const equipmentUpdateSchema = equipmentCreateSchema.extend({ hasHourMeter: z.boolean() }).partial();
 export type EquipmentCreateInput = z.infer<typeof equipmentCreateSchema>;
+export type EquipmentUpdateInput = z.infer<typeof equipmentUpdateSchema>;
 
 // ── Services at a site ────────────────────────────────────────────────────────────────────────
 
@@ -95,6 +109,10 @@ export const serviceSettingsSchema = z
     path: ['designFactorBands'],
   });
 export type ServiceSettingsInput = z.infer<typeof serviceSettingsSchema>;
+
+/** The path of one service at one site; an unknown service code is a 404, not a 400. */
+export const siteServiceParamsSchema = z.strictObject({ siteId: uuidSchema, serviceCode: z.string().trim().min(1).max(80) });
+export const siteServicesQuerySchema = z.object({ siteId: uuidSchema });
 
 // ── Constructions and fitting types ───────────────────────────────────────────────────────────
 
@@ -175,8 +193,9 @@ const fittingFields = {
   notes: noteSchema.default(null),
 };
 export const fittingTypeCreateSchema = z.strictObject(fittingFields);
-export const fittingTypeUpdateSchema = z.strictObject(fittingFields).omit({ code: true }).partial();
+export const fittingTypeUpdateSchema = z.strictObject({ ...fittingFields, notes: noteSchema }).omit({ code: true }).partial();
 export type FittingTypeCreateInput = z.infer<typeof fittingTypeCreateSchema>;
+export type FittingTypeUpdateInput = z.infer<typeof fittingTypeUpdateSchema>;
 
 // ── Positions ─────────────────────────────────────────────────────────────────────────────────
 
@@ -237,6 +256,13 @@ export const positionListQuerySchema = listQuery(['code', 'name', 'equipment', '
   occupied: z.enum(['yes', 'no']).optional(),
 });
 export const equipmentListQuerySchema = listQuery(['assetNumber', 'name'] as const).extend({ siteId: uuidSchema.optional(), areaId: uuidSchema.optional() });
+export const areaListQuerySchema = listQuery(['code', 'name'] as const).extend({ siteId: uuidSchema.optional() });
+export type ArchivedFilter = 'exclude' | 'include' | 'only';
+export type AreaListQuery = z.infer<typeof areaListQuerySchema>;
+export type EquipmentListQuery = z.infer<typeof equipmentListQuerySchema>;
+export type PositionListQuery = z.infer<typeof positionListQuerySchema>;
+export type ConstructionListQuery = z.infer<typeof constructionListQuerySchema>;
+export type FittingTypeListQuery = z.infer<typeof fittingTypeListQuerySchema>;
 
 // ── Outputs ───────────────────────────────────────────────────────────────────────────────────
 
@@ -256,6 +282,7 @@ export interface AreaDto {
   code: string;
   name: string;
   archivedAt: string | null;
+  abilities: { update: boolean; archive: boolean };
 }
 export interface EquipmentDto {
   id: string;
@@ -268,6 +295,7 @@ export interface EquipmentDto {
   hourMeterHours: number | null;
   hourMeterReadAt: string | null;
   archivedAt: string | null;
+  abilities: { update: boolean; archive: boolean };
 }
 export interface SiteServiceDto {
   siteId: string;
@@ -353,4 +381,21 @@ export interface PositionDto {
   archivedAt: string | null;
   updatedAt: string;
   abilities: { update: boolean; archive: boolean; install: boolean };
+}
+
+/** The lists and tables the client needs to fill pickers and explain checks, in one cacheable answer. */
+export interface ReferenceDto {
+  sizeClasses: SizeClass[];
+  media: Medium[];
+  tubeCompounds: Array<{ code: TubeCompound; name: string }>;
+  /** Tube compound → medium code → rating and source; a missing cell means not known. */
+  compatibility: CompatibilityTable;
+  compatibilityRatings: CompatibilityRating[];
+  reinforcements: Reinforcement[];
+  electricalProperties: ElectricalProperty[];
+  criticalityLevels: CriticalityDefinition[];
+  removalReasons: RemovalReasonDefinition[];
+  fittingStyles: Array<{ code: FittingStyle; label: string }>;
+  services: ServiceDefinition[];
+  units: { pressure: PressureUnit[]; length: LengthUnit[]; temperature: TemperatureUnit[] };
 }
