@@ -322,3 +322,24 @@ describe('the register list', () => {
     expect(row.check_outcome).toBe('fail');
   });
 });
+
+describe('how removals count in life data', () => {
+  it('lets the plant count a removal reason differently, and records each removal with the outcome in force', async () => {
+    const defaults = (await call(server.app, 'get', '/api/removal-outcomes', technician)).body.data;
+    expect(defaults.find((r: { reason: string }) => r.reason === 'worn-at-inspection')).toMatchObject({ lifeOutcome: 'failure', defaultLifeOutcome: 'failure' });
+    const outcomes = Object.fromEntries(defaults.map((r: { reason: string; lifeOutcome: string }) => [r.reason, r.lifeOutcome]));
+    const bad = await call(server.app, 'put', '/api/removal-outcomes', engineer).send({ outcomes: { ...outcomes, relocated: 'maybe' } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('outcomes.relocated');
+    await call(server.app, 'put', '/api/removal-outcomes', engineer).send({ outcomes: { ...outcomes, relocated: 'failure' } }).expect(200);
+    try {
+      const position = await buildAirPosition(server.ctx, equipment);
+      const id = await stock();
+      await install(id, position.id).expect(200);
+      await call(server.app, 'post', `/api/assemblies/${id}/remove`, technician).send({ reason: 'relocated' }).expect(200);
+      expect((await events(id)).find((e) => e.kind === 'remove')!.data).toMatchObject({ reason: 'relocated', lifeOutcome: 'failure' });
+    } finally {
+      await call(server.app, 'put', '/api/removal-outcomes', engineer).send({ outcomes }).expect(200);
+    }
+  });
+});

@@ -1,3 +1,4 @@
+import { removalOutcomesSchema } from '../../../shared/src/schemas/assemblies.schema.js';
 import { idParamsSchema } from '../../../shared/src/schemas/common.schema.js';
 import {
   constructionCreateSchema,
@@ -13,6 +14,7 @@ import {
 import { presentConstruction, presentFittingType, presentReference, presentSiteService } from '../presenters/register.presenter.js';
 import * as constructions from '../services/constructions.service.js';
 import * as fittingTypes from '../services/fitting-types.service.js';
+import * as removalOutcomes from '../services/removal-outcomes.service.js';
 import * as siteServices from '../services/site-services.service.js';
 import type { RouteDef } from './route.js';
 
@@ -146,6 +148,25 @@ export const catalogueRoutes: RouteDef[] = [
     async handler({ ctx, res, actor, params }) {
       await fittingTypes.archiveFittingType(ctx, actor, params.id);
       res.status(204).end();
+    },
+  },
+
+  // ── How removals count in life data ──
+  {
+    method: 'get',
+    path: '/removal-outcomes',
+    action: 'register.read',
+    async handler({ ctx, res }) {
+      res.json({ data: await removalOutcomes.listRemovalOutcomes(ctx) });
+    },
+  },
+  {
+    method: 'put',
+    path: '/removal-outcomes',
+    action: 'removal-outcomes.update',
+    schemas: { body: removalOutcomesSchema },
+    async handler({ ctx, res, actor, body }) {
+      res.json({ data: await removalOutcomes.updateRemovalOutcomes(ctx, actor, body) });
     },
   },
 

@@ -289,3 +289,22 @@ export const REMOVAL_CAUTIONS: readonly string[] = [
   'Stand clear of the hose ends while you loosen fittings; a hose under pressure can whip.',
   'Follow local codes, the site’s procedures and the competent person’s instructions.',
 ];
+
+/** The plant's mapping of removal reasons to life outcomes; every reason must be given. */
+export const removalOutcomesSchema = z.strictObject({
+  outcomes: z.strictObject(
+    Object.fromEntries(REMOVAL_REASONS.map((r) => [r, z.enum(['failure', 'suspension'], { message: 'Choose failure or suspension' })])) as Record<
+      (typeof REMOVAL_REASONS)[number],
+      z.ZodEnum<{ failure: 'failure'; suspension: 'suspension' }>
+    >,
+  ),
+});
+export type RemovalOutcomesInput = z.infer<typeof removalOutcomesSchema>;
+
+export interface RemovalOutcomeDto {
+  reason: (typeof REMOVAL_REASONS)[number];
+  label: string;
+  description: string;
+  lifeOutcome: 'failure' | 'suspension';
+  defaultLifeOutcome: 'failure' | 'suspension';
+}

@@ -83,4 +83,14 @@ export const CATALOGUE_EXPECTATIONS: Expectations = {
   },
 
   'GET /reference': { anonymous: 401, roles: everyone(200), prepare: async () => ({ path: '/api/reference' }) },
+  'GET /removal-outcomes': { anonymous: 401, roles: everyone(200), prepare: async () => ({ path: '/api/removal-outcomes' }) },
+  'PUT /removal-outcomes': {
+    anonymous: 401,
+    roles: only(EDITORS, 200),
+    // Writing the defaults back leaves the plant's mapping as the other tests expect it.
+    prepare: async () => ({
+      path: '/api/removal-outcomes',
+      body: { outcomes: { failure: 'failure', damaged: 'failure', 'worn-at-inspection': 'failure', 'planned-replacement': 'suspension', relocated: 'suspension', obsolete: 'suspension' } },
+    }),
+  },
 };
