@@ -10,7 +10,7 @@ function homeApi() {
   return new MockApi()
     .on('GET /api/sites', json({ data: SITES }))
     .on('GET /api/users', ({ url }) => {
-      const totals: Record<string, number> = { active: 12, invited: 3, inactive: 1 };
+      const totals: Record<string, number> = { active: 12, invited: 3, expired: 2, inactive: 1 };
       const total = totals[url.searchParams.get('status') ?? ''] ?? 16;
       return json({ data: [], pagination: { page: 1, pageSize: 1, total } });
     });
@@ -49,7 +49,9 @@ describe('home page', () => {
     const card = await screen.findByRole('region', { name: 'Users' });
     expect(await within(card).findByText('12')).toBeTruthy();
     expect(within(card).getByText('3')).toBeTruthy();
-    expect(within(card).getByText('16 users')).toBeTruthy();
+    expect(within(card).getByText('2')).toBeTruthy();
+    expect(within(card).getByText('Access expired')).toBeTruthy();
+    expect(within(card).getByText('18 users')).toBeTruthy();
     expect(within(card).getByRole('link', { name: 'Manage users' }).getAttribute('href')).toBe('/users');
   });
 

@@ -4,8 +4,9 @@ import type { UserDto, UserStatus } from '../../../shared/src/schemas/users.sche
 import type { User } from '../entities/index.js';
 import type { Actor } from '../policies/actor.js';
 
-export function userStatus(user: Pick<User, 'active' | 'passwordHash'>): UserStatus {
+export function userStatus(user: Pick<User, 'active' | 'passwordHash' | 'accessExpiresOn'>, today: string): UserStatus {
   if (!user.active) return 'inactive';
+  if (user.accessExpiresOn && user.accessExpiresOn < today) return 'expired';
   return user.passwordHash ? 'active' : 'invited';
 }
 
@@ -28,8 +29,8 @@ export function presentMe(user: User, sites: Map<string, SiteSummary>): MeDto {
   };
 }
 
-export function presentUser(user: User, actor: Actor, sites: Map<string, SiteSummary>): UserDto {
-  const status = userStatus(user);
+export function presentUser(user: User, actor: Actor, sites: Map<string, SiteSummary>, today = new Date().toISOString().slice(0, 10)): UserDto {
+  const status = userStatus(user, today);
   const admin = roleMay(actor.role, 'users.update');
   return {
     id: user.id,

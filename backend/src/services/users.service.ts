@@ -42,9 +42,13 @@ export async function listUsers(ctx: AppContext, actor: Actor, query: UserListQu
     params.push(query.role);
     where.push(`u.role = $${params.length}`);
   }
+  const notExpired = `(u.access_expires_on IS NULL OR u.access_expires_on >= $${params.length + 1}::date)`;
+  const today = ctx.clock.now().toISOString().slice(0, 10);
   if (query.status === 'inactive') where.push('NOT u.active');
-  if (query.status === 'invited') where.push('u.active AND u.password_hash IS NULL');
-  if (query.status === 'active') where.push('u.active AND u.password_hash IS NOT NULL');
+  if (query.status === 'expired') where.push(`u.active AND NOT ${notExpired}`);
+  if (query.status === 'invited') where.push(`u.active AND u.password_hash IS NULL AND ${notExpired}`);
+  if (query.status === 'active') where.push(`u.active AND u.password_hash IS NOT NULL AND ${notExpired}`);
+  if (query.status && query.status !== 'inactive') params.push(today);
   const whereSql = where.join(' AND ');
   const order = `${SORT_COLUMNS[query.sort]} ${query.dir === 'desc' ? 'DESC' : 'ASC'} NULLS LAST, u.id`;
   const [countRow] = await ctx.ds.query(`SELECT count(*)::int AS n FROM users u WHERE ${whereSql}`, params);

@@ -40,13 +40,14 @@ export const USER_SORTS = ['name', 'email', 'role', 'lastSignInAt', 'createdAt']
 export const userListQuerySchema = pageQuerySchema.extend({
   q: z.string().trim().max(100).optional(),
   role: z.enum(ROLES).optional(),
-  status: z.enum(['active', 'invited', 'inactive']).optional(),
+  status: z.enum(['active', 'invited', 'expired', 'inactive']).optional(),
   sort: z.enum(USER_SORTS).default('name'),
   dir: z.enum(['asc', 'desc']).default('asc'),
 });
 export type UserListQuery = z.infer<typeof userListQuerySchema>;
 
-export type UserStatus = 'active' | 'invited' | 'inactive';
+/** `expired`: active, but the access expiry date has passed, so the user cannot sign in. */
+export type UserStatus = 'active' | 'invited' | 'expired' | 'inactive';
 
 export interface UserDto {
   id: string;

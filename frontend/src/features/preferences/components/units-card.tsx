@@ -17,7 +17,7 @@ export function UnitsCard({ preferences }: { preferences: Preferences }) {
     <Card labelledBy={titleId}>
       <CardHeader title="Your units" titleId={titleId} description="Values are shown in these units." />
       <CardBody className="flex flex-col gap-2">
-        <dl className="grid grid-cols-3 gap-3">
+        <dl className="grid grid-cols-1 gap-3 sm:grid-cols-3">
           {rows.map((row) => (
             <div key={row.label} className="flex flex-col rounded-[var(--radius-control)] bg-ink-50 px-3 py-2">
               <dt className="text-sm text-ink-600">{row.label}</dt>

@@ -4,6 +4,7 @@ import { ROLES, ROLE_LABELS } from '@shared/roles';
 export const STATUS_LABELS: Record<UserStatus, string> = {
   active: 'Active',
   invited: 'Invited',
+  expired: 'Access expired',
   inactive: 'Inactive',
 };
 

@@ -25,8 +25,8 @@ export function UsersSummaryCard() {
         ) : counts.data.total === 0 ? (
           <EmptyState title="No users yet">Invite the people who work with your plant's hoses from user administration.</EmptyState>
         ) : (
-          <dl className="grid grid-cols-3 gap-3">
-            {(['active', 'invited', 'inactive'] as const).map((status) => (
+          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+            {(['active', 'invited', 'expired', 'inactive'] as const).map((status) => (
               <div key={status} className="flex flex-col rounded-[var(--radius-control)] bg-ink-50 px-3 py-2">
                 <dt className="text-sm text-ink-600">{STATUS_LABELS[status]}</dt>
                 <dd className="text-2xl font-bold text-ink-950">{counts.data[status].toLocaleString()}</dd>

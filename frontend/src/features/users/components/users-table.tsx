@@ -34,7 +34,7 @@ const columns = [
       </Link>
     ),
   }),
-  column.accessor('email', { header: 'E-mail', cell: (info) => <span className="[overflow-wrap:anywhere]">{info.getValue()}</span> }),
+  column.accessor('email', { header: 'E-mail', cell: (info) => <span className="break-words">{info.getValue().replace(/([@.])/g, "$1\u200b")}</span> }),
   column.accessor('role', { header: 'Role', cell: (info) => ROLE_LABELS[info.getValue()] }),
   column.display({ id: 'sites', header: 'Sites', enableSorting: false, cell: (info) => describeUserSites(info.row.original) }),
   column.accessor('status', { header: 'Status', enableSorting: false, cell: (info) => <UserStatusBadge status={info.getValue()} /> }),
