@@ -3,7 +3,8 @@ import { parseTagCode } from '../../shared/src/tags/tag-code.js';
 import type { Equipment, FittingType, Construction, Site } from '../../backend/src/entities/index.js';
 import { Position } from '../../backend/src/entities/index.js';
 import { call, startTestServer, type TestServer } from '../support/api.js';
-import { buildAirConstruction, buildAirPosition, buildClawFitting, buildPlace, key, stockAssembly } from '../support/assembly-factories.js';
+import { buildConstruction, buildFittingType } from '../support/register-factories.js';
+import { buildAirPosition, buildPlace, key, stockAssembly } from '../support/assembly-factories.js';
 import { buildUser, signIn } from '../support/factories.js';
 
 let server: TestServer;
@@ -18,8 +19,8 @@ let secondTechnician: string;
 beforeAll(async () => {
   server = await startTestServer();
   ({ site, equipment } = await buildPlace(server.ctx));
-  construction = await buildAirConstruction(server.ctx);
-  fitting = await buildClawFitting(server.ctx);
+  construction = await buildConstruction(server.ctx);
+  fitting = await buildFittingType(server.ctx);
   const sites = { allSites: false, siteIds: [site.id] };
   technician = await signIn(server.app, (await buildUser(server.ctx, { role: 'technician', ...sites })).email);
   secondTechnician = await signIn(server.app, (await buildUser(server.ctx, { role: 'technician', ...sites })).email);

@@ -1,6 +1,7 @@
 import { Assembly, AssemblyEvent } from '../../../backend/src/entities/index.js';
 import type { AssemblyStatus } from '../../../shared/src/schemas/assemblies.schema.js';
-import { buildAirConstruction, buildAirPosition, buildClawFitting, buildPlace } from '../../support/assembly-factories.js';
+import { buildConstruction, buildFittingType } from '../../support/register-factories.js';
+import { buildAirPosition, buildPlace } from '../../support/assembly-factories.js';
 import { EDITORS, everyone, FIELD, only, type Expectations, type Fixtures } from './types.js';
 
 let serial = 0;
@@ -9,8 +10,8 @@ let serial = 0;
 async function assemblyIn(fx: Fixtures, status: AssemblyStatus, options: { routedBendRadiusMm?: number } = {}) {
   const { ctx } = fx.server;
   const { equipment } = await buildPlace(ctx, fx.siteB);
-  const construction = await buildAirConstruction(ctx);
-  const fitting = await buildClawFitting(ctx);
+  const construction = await buildConstruction(ctx);
+  const fitting = await buildFittingType(ctx);
   const position = await buildAirPosition(ctx, equipment, options);
   const installed = status === 'installed';
   const assembly = await ctx.ds.getRepository(Assembly).save({
