@@ -34,7 +34,7 @@ const columns = [
       </Link>
     ),
   }),
-  column.accessor('email', { header: 'E-mail', cell: (info) => <span className="break-words">{info.getValue().replace(/([@.])/g, "$1\u200b")}</span> }),
+  column.accessor('email', { header: 'E-mail', cell: (info) => <BreakableEmail email={info.getValue()} /> }),
   column.accessor('role', { header: 'Role', cell: (info) => ROLE_LABELS[info.getValue()] }),
   column.display({ id: 'sites', header: 'Sites', enableSorting: false, cell: (info) => describeUserSites(info.row.original) }),
   column.accessor('status', { header: 'Status', enableSorting: false, cell: (info) => <UserStatusBadge status={info.getValue()} /> }),
@@ -197,5 +197,20 @@ function UserCards({ table, busy }: { table: TanStackTable<UserDto>; busy: boole
         })}
       </ul>
     </div>
+  );
+}
+
+/** An e-mail address that may wrap after its @ and dots, never inside a word. */
+function BreakableEmail({ email }: { email: string }) {
+  const parts = email.split(/(?<=[@.])/);
+  return (
+    <span>
+      {parts.map((part, i) => (
+        <span key={i}>
+          {part}
+          {i < parts.length - 1 ? <wbr /> : null}
+        </span>
+      ))}
+    </span>
   );
 }
