@@ -3,6 +3,7 @@ import type { Role } from '../../../shared/src/roles.js';
 import { Site, User } from '../entities/index.js';
 import { hashPassword } from '../lib/crypto.js';
 import { Random } from './random.js';
+import { seedRegister } from './register-scenario.js';
 
 /** The invented company of the demo, its sites and people. No real company or person is meant. */
 export const DEMO_COMPANY = 'Kestrel Ridge Aggregates';
@@ -25,6 +26,8 @@ export const DEMO_SIGN_INS: ReadonlyArray<{ role: Role; email: string; name: str
 
 const GIVEN = ['Aled', 'Bryony', 'Cai', 'Delyth', 'Ewan', 'Ffion', 'Gethin', 'Hollis', 'Ianto', 'Juno', 'Kit', 'Lowri', 'Madoc', 'Nia', 'Osian', 'Petra', 'Rhodri', 'Seren', 'Tamsin', 'Wyn'];
 const FAMILY = ['Ashgrove', 'Brindle', 'Carrow', 'Dunmere', 'Elsworth', 'Fenwick', 'Garroway', 'Holloway', 'Ilsley', 'Jessop', 'Kennard', 'Lathom', 'Marrick', 'Norland', 'Oakes', 'Penrose'];
+/** The invented names people in the demo are drawn from. */
+export { GIVEN as DEMO_GIVEN_NAMES, FAMILY as DEMO_FAMILY_NAMES };
 
 export interface DemoOptions {
   /** The day the demo's "today" falls on; history is drawn before it. */
@@ -42,6 +45,7 @@ export async function seedDemo(ds: DataSource, options: DemoOptions): Promise<vo
     const sites = await manager.getRepository(Site).save(DEMO_SITES.map((s) => ({ ...s })));
     const siteId = (code: string) => sites.find((s) => s.code === code)!.id;
     await seedUsers(manager, random, options, passwordHash, siteId);
+    await seedRegister(ds, manager, { anchor: options.anchor, seed: options.seed ?? DEMO_SEED, actorEmail: DEMO_SIGN_INS[0]!.email });
   });
 }
 

@@ -25,7 +25,6 @@ import { AppError, ConflictError, NotFoundError, ValidationError } from '../erro
 import type { Actor } from '../policies/actor.js';
 import { loadCheckContext, refreshStoredOutcome, runChecks } from './assembly-checks.service.js';
 import { recordAudit } from './audit.service.js';
-import { getSetting } from './settings.service.js';
 
 const inScope = (actor: Actor, siteId: string) => actor.allSites || actor.siteIds.includes(siteId);
 
@@ -184,7 +183,16 @@ export class ChecksFailedError extends AppError {
   }
 }
 
-async function recordOverrides(ctx: AppContext, manager: EntityManager, actor: Actor, assembly: Assembly, position: Position, override: OverrideInput, checks: SelectionCheckCode[]) {
+async function recordOverrides(
+  ctx: AppContext,
+  manager: EntityManager,
+  actor: Actor,
+  assembly: Assembly,
+  position: Position,
+  override: OverrideInput,
+  checks: SelectionCheckCode[],
+  at: Date = ctx.clock.now(),
+) {
   for (const check of checks) {
     await manager.getRepository(CheckOverride).insert({
       assemblyId: assembly.id,
@@ -193,10 +201,10 @@ async function recordOverrides(ctx: AppContext, manager: EntityManager, actor: A
       reason: override.reason,
       reviewOn: override.reviewOn,
       actorId: actor.id,
-      createdAt: ctx.clock.now(),
+      createdAt: at,
     });
   }
-  await addEvent(ctx, manager, actor, assembly, 'override', { note: override.reason }, { positionId: position.id, siteId: position.siteId, data: { checks, reviewOn: override.reviewOn } });
+  await addEvent(ctx, manager, actor, assembly, 'override', { note: override.reason, occurredAt: at.toISOString() }, { positionId: position.id, siteId: position.siteId, data: { checks, reviewOn: override.reviewOn } });
   await recordAudit(manager, { actorId: actor.id, action: 'assembly.check_overridden', entityType: 'assembly', entityId: assembly.id, siteId: position.siteId, after: { checks, reason: override.reason, reviewOn: override.reviewOn, positionId: position.id } });
 }
 
@@ -253,7 +261,7 @@ async function installInto(ctx: AppContext, manager: EntityManager, actor: Actor
     siteId: position.siteId,
     data: { checkOutcome: summary.outcome, ...(crossSite ? { crossSite: true, fromSiteId: assembly.siteId, toSiteId: position.siteId } : {}) },
   });
-  if (overridden.length) await recordOverrides(ctx, manager, actor, installed, position, input.override!, overridden);
+  if (overridden.length) await recordOverrides(ctx, manager, actor, installed, position, input.override!, overridden, at);
   await recordHourMeter(manager, position, input.hourMeterHours, at);
   await refreshStoredOutcome(manager, { ...context, assembly: installed }, ctx.clock.now());
   await recordAudit(manager, {
@@ -278,8 +286,9 @@ export async function installAssembly(ctx: AppContext, manager: EntityManager, a
 // ── Removal, replacement, tag-out ─────────────────────────────────────────────────────────────
 
 /** How a removal reason counts in life data: the plant's mapping, or the default. */
-export async function lifeOutcomeOf(ctx: AppContext, reason: RemovalReason): Promise<LifeOutcome> {
-  const mapping = (await getSetting<Partial<Record<RemovalReason, LifeOutcome>>>(ctx, 'removal_outcomes')) ?? {};
+export async function lifeOutcomeOf(manager: EntityManager, reason: RemovalReason): Promise<LifeOutcome> {
+  const [row] = await manager.query(`SELECT value FROM app_settings WHERE key = 'removal_outcomes'`);
+  const mapping = (row?.value ?? {}) as Partial<Record<RemovalReason, LifeOutcome>>;
   return mapping[reason] ?? defaultLifeOutcome(reason);
 }
 
@@ -290,7 +299,7 @@ async function removeFrom(ctx: AppContext, manager: EntityManager, actor: Actor,
   if (assembly.installedAt && at < assembly.installedAt) {
     throw new ValidationError('The removal cannot be before the install', 'occurredAt');
   }
-  const lifeOutcome = await lifeOutcomeOf(ctx, input.reason);
+  const lifeOutcome = await lifeOutcomeOf(manager, input.reason);
   await addEvent(ctx, manager, actor, assembly, 'remove', input, {
     positionId: position.id,
     data: { reason: input.reason, lifeOutcome, installedAt: assembly.installedAt?.toISOString() ?? null },
