@@ -1,17 +1,41 @@
 import type { ElectricalProperty } from '../../../shared/src/checks/types.js';
 import type { AssemblyStatus, ProofTestMedium } from '../../../shared/src/schemas/assemblies.schema.js';
 import type { FittingStyle } from '../../../shared/src/schemas/register.schema.js';
-import type { Criticality } from '../../../shared/src/services/criticality.js';
+import { inspectionIntervalDays, type Criticality } from '../../../shared/src/services/criticality.js';
 import type { RemovalReason } from '../../../shared/src/services/removal-reasons.js';
-import { defaultServiceSettings, SERVICE_CATALOGUE, type ServiceSettings } from '../../../shared/src/services/service-catalogue.js';
+import { defaultServiceSettings, SERVICE_CATALOGUE, serviceByCode, type ServiceSettings } from '../../../shared/src/services/service-catalogue.js';
 import { DEMO_FAMILY_NAMES, DEMO_GIVEN_NAMES } from './demo-scenario.js';
 import { Random } from './random.js';
 import { CONSTRUCTIONS, constructionByCode, FITTING_TYPES, fittingSize, HOSE_PRICE_PER_M, type ConstructionRow } from './register-catalogue.js';
+import { HourMeter, simulatePosition, type LifeDraw } from './register-history.js';
+import {
+  BAD_BATCH,
+  CLAW_TAG_OUT_NOTE,
+  drawMode,
+  failureNote,
+  LIFE_MODELS,
+  LONGEST_LIFE_DAYS,
+  PLANNED_NOTES,
+  PLANNED_SCRAP_NOTE,
+  RELOCATED_NOTES,
+  RETEST_FAILED_NOTE,
+  RETURN_NOTES,
+  SCRAP_NOTES,
+  TAG_OUT_NOTES,
+  VACANT_NOTES,
+  type LifeModel,
+} from './register-life.js';
 import { SITE_TEMPLATES, type EquipmentTemplate, type PositionTemplate } from './register-sites.js';
 
 // The register of the demo as a plan: plain data drawn from a seeded Random and the anchor date,
 // nothing read from the clock or the database, so the same seed and anchor give the same plan.
 // Times are ISO strings; pressures kPa, lengths mm, temperatures °C, costs in pounds.
+//
+// The past is three years of records at every position: hose after hose, each life drawn from its
+// construction's life distribution (register-life.ts), inspected at about the position's interval,
+// and ended by a failure, a planned replacement or a move, with the removed hose scrapped, kept
+// for the hose shop, or re-tested back into stock and fitted elsewhere. The hose in place at the
+// anchor is the last life at its position.
 
 export interface SiteServicePlan {
   siteCode: string;
@@ -78,7 +102,8 @@ export type AssemblyStep =
   | { kind: 'remove'; at: string; reason: RemovalReason; hourMeterHours: number | null; workOrder: string | null; note: string | null }
   | { kind: 'tag_out'; at: string; note: string; workOrder: string | null }
   | { kind: 'scrap'; at: string; note: string }
-  | { kind: 'return_to_stock'; at: string; storeLocation: string; inspectionNote: string };
+  | { kind: 'return_to_stock'; at: string; storeLocation: string; inspectionNote: string }
+  | { kind: 'inspection'; at: string; positionCode: string; result: 'pass' | 'defects'; findings: string[]; note: string | null; hourMeterHours: number | null };
 
 export interface FittingEndPlan {
   fittingCode: string;
@@ -135,6 +160,15 @@ export interface RegisterPlan {
   assemblies: AssemblyPlan[];
   positionChanges: PositionChangePlan[];
   constructionChanges: ConstructionChangePlan[];
+  history: HistorySummary;
+}
+
+/** What the history of the demo holds, for the reader and the tests. */
+export interface HistorySummary {
+  /** The first day of records, three years before the anchor. */
+  recordsBeganOn: string;
+  /** The hose batch that wore out early, and the positions its assemblies served. */
+  badBatch: { siteCode: string; constructionCode: string; hoseBatch: string; positionCodes: string[] };
 }
 
 /** Records began three years before the anchor; hoses installed earlier are flagged. */
@@ -157,102 +191,26 @@ const OVERAGE_INSTALLED_DAYS = 2372;
 const SPECIAL = new Set([OVERRIDDEN_POSITION, PRESSURE_RAISED_POSITION, REROUTED_POSITION, OVERAGE_POSITION]);
 
 const COUNTS = {
+  /** Positions left empty: the first few with their hose awaiting re-test, the rest with it scrapped. */
   vacant: 8,
+  vacantAwaitingRetest: 5,
   taggedOut: 6,
-  predatesRecords: 9,
-  recentRemovals: 32,
-  recentRemovalsAtVacant: 5,
-  scrappedRemovals: 42,
-  returnedToStock: 4,
-  newStock: 64,
+  /** Spares on the shelf, with the re-tested assemblies that were not fitted again. */
+  inStock: 62,
   awaitingProofTest: 6,
   storageExpired: 2,
 };
 
-/** Typical life of a hose in each service (Weibull scale η, days, and shape β), before a position's own factor. */
-const LIFE: Readonly<Record<string, { etaDays: number; beta: number }>> = {
-  'compressed-air': { etaDays: 420, beta: 1.6 },
-  'water-suction-discharge': { etaDays: 1000, beta: 1.8 },
-  'water-discharge': { etaDays: 700, beta: 1.4 },
-  'fuel-oil': { etaDays: 900, beta: 1.5 },
-  'chemical-transfer': { etaDays: 800, beta: 1.6 },
-  'liquefied-gas': { etaDays: 1500, beta: 2.5 },
-  'dry-bulk': { etaDays: 500, beta: 2 },
-  'hot-air-bulk-unloading': { etaDays: 450, beta: 2.2 },
-  slurry: { etaDays: 240, beta: 2.4 },
-  'abrasive-blasting': { etaDays: 140, beta: 2 },
-  'vacuum-truck-suction': { etaDays: 260, beta: 1.8 },
-  'hydraulic-suction-return': { etaDays: 1100, beta: 1.9 },
-  'food-beverage': { etaDays: 720, beta: 1.5 },
-  steam: { etaDays: 300, beta: 1.6 },
-};
-
-/** Services where a hose may well have been in place since before records began. */
-const LONG_LIVED = new Set(['water-suction-discharge', 'water-discharge', 'fuel-oil', 'liquefied-gas', 'chemical-transfer', 'food-beverage']);
-
 const LABOUR_PER_ASSEMBLY = 18;
 const DAY_MS = 86_400_000;
-const HOUR_MS = 3_600_000;
+const HOUR = 1 / 24;
 /** Keeps the register's draws apart from the people's, so one never reshuffles the other. */
 const REGISTER_STREAM = 0x5eed4e67;
+/** Each position's history and each machine's hour meter draw from a stream of their own. */
+const HISTORY_STREAM = 0x4a15c0de;
+/** A removed assembly that passed its re-test is fitted again, where one of its construction and length is wanted, this often. */
+const REUSE_CHANCE = 0.7;
 
-const FAILURE_NOTES = [
-  'Burst about 300 mm from end A; reinforcement broken.',
-  'Leaking at the end B ferrule; found spraying at the start of the shift.',
-  'Pulled out of the end A fitting.',
-  'Burst at the bend nearest end B.',
-  'Blister on the cover burst through; tube split underneath.',
-];
-const WORN_NOTES = [
-  'Cover worn through to the reinforcement where it rubs on the frame.',
-  'Reinforcement showing at the clamp.',
-  'Cover cracked all along the top of the run.',
-  'Abrasion through the cover on the underside.',
-];
-const DAMAGED_NOTES = [
-  'Cover gouged through to the reinforcement by a sharp edge.',
-  'Crushed when a load was set down on it.',
-  'Kinked flat where it was pulled round a corner.',
-];
-/** Damage that only happens where machines move and rock falls. */
-const MOBILE_DAMAGED_NOTES = ['Crushed under a loader wheel.', 'Cut by falling rock.', 'Kinked flat when the machine tracked over it.'];
-const MOBILE_AREAS = new Set(['DNB', 'DEV', 'STP', 'DWT', 'SHC', 'SMP']);
-const SERVICE_FAILURE_NOTES: Readonly<Record<string, string[]>> = {
-  slurry: ['Tube worn through on the outside of the bend at the pump discharge.', 'Tube worn thin at end A; leaking slurry through the cover.'],
-  'abrasive-blasting': ['Worn through a metre from the nozzle; media escaping.', 'Tube worn through at the pot outlet.'],
-  'compressed-air': ['Burst near end A; the whip restraint held it.', 'Burst where the hose crosses the frame.'],
-  'hydraulic-suction-return': ['Cover cracked and weeping oil at the clamp.', 'Leaking at the end A crimp.'],
-  'vacuum-truck-suction': ['Helix broken; hose collapsed under suction.', 'Tube worn through on the boom side.'],
-};
-const SCRAP_NOTES = [
-  'Not fit to re-test: reinforcement damaged. Cut in two and scrapped.',
-  'Scrapped: failed the hose shop inspection.',
-  'Fittings recovered for re-use; hose scrapped.',
-  'Scrapped after the failure review.',
-];
-const RECENT_NOTES: Readonly<Record<RemovalReason, string[]>> = {
-  'planned-replacement': ['Changed at the planned interval.', 'Changed with the equipment’s planned service.'],
-  relocated: ['Taken off while the equipment was moved; to be re-tested before it is used again.', 'Swapped for a longer assembly; sent to the hose shop.'],
-  obsolete: ['Taken off: the line is not needed until the plant change is finished.'],
-  'worn-at-inspection': ['Cover cracking at the clamp found at inspection; to be assessed in the hose shop.'],
-  damaged: ['Cover gouged; sent to the hose shop to decide whether it can be re-tested.'],
-  failure: ['Failed in service; kept for the failure review.'],
-};
-const VACANT_NOTES = [
-  'Taken off while the equipment is stood down for repair; to be re-tested before it is refitted.',
-  'Line taken out of use while the pipework is changed.',
-];
-const TAG_OUT_NOTES = [
-  'Weeping at the end A fitting. Isolated and tagged out until the replacement is built.',
-  'Cover cut through to the reinforcement. Tagged out; replacement on order.',
-  'Bulge near end B seen at the pre-start check. Tagged out; do not pressurise.',
-  'Cover cracking along the top of the run. Tagged out pending replacement.',
-];
-const CLAW_TAG_OUT_NOTE = 'Whip restraint found missing and a coupling pin bent. Tagged out until both are replaced.';
-const RETURN_NOTES = [
-  'Inspected in the hose shop: cover and fittings sound, re-tested. Back in stock.',
-  'No damage found; re-tested and re-tagged. Back in stock.',
-];
 const OVERRIDE_REASON =
   'The grizzly guard rail forces a 110 mm bend at the breaker inlet and there is no other route until the new guard with a wider hose port is fitted (WO-47120). ' +
   'Accepted for the interim: the bend is inspected every week for kinking and cover cracking, and whip restraints are fitted at both ends. Review when the guard is changed.';
@@ -262,31 +220,45 @@ interface Slot {
   template: PositionTemplate;
   equipment: EquipmentTemplate;
   construction: ConstructionRow;
-  etaDays: number;
-  beta: number;
-  vacant: boolean;
-  vacantKind: 'recent' | 'scrapped';
-  taggedOut: boolean;
-  predates: boolean;
-  recent: number;
-  scrapped: number;
-  returned: number;
+  model: LifeModel;
+  meter: HourMeter | null;
+  /** When the equipment first ran, when that falls within records; else null. */
+  commissionedAt: number | null;
+  vacant: 'awaiting-retest' | 'scrapped' | null;
+  lives: LifeDraw[];
+  tagOut: { at: number; note: string } | null;
 }
 
-interface Moment {
-  days: number;
-  hour: number;
+/** A re-tested assembly on the shelf, waiting to be fitted again. */
+interface Returned {
+  plan: AssemblyPlan;
+  availableAt: number;
+  siteCode: string;
+  constructionCode: string;
+  /** Where it came out: it goes back anywhere but there. */
+  positionCode: string;
+}
+
+/** A stream of its own for `key`, so that changing one position's draws leaves the others alone. */
+function streamFor(seed: number, key: string): Random {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < key.length; i++) h = Math.imul(h ^ key.charCodeAt(i), 0x01000193);
+  return new Random((h ^ seed ^ HISTORY_STREAM) >>> 0);
 }
 
 /** The whole register of the demo, drawn from `seed` and the anchor. */
 export function planRegister(seed: number, anchor: Date): RegisterPlan {
   const rng = new Random((seed ^ REGISTER_STREAM) >>> 0);
   const day0 = Date.UTC(anchor.getUTCFullYear(), anchor.getUTCMonth(), anchor.getUTCDate());
-  /** A time `days` before the anchor's day, at `hour` UTC; always before the anchor for days ≥ 1. */
-  const timeAt = (m: Moment) => new Date(day0 - m.days * DAY_MS + m.hour * HOUR_MS).toISOString();
+  // Times inside the plan are days from the start of the anchor's day, negative in the past.
+  const iso = (t: number) => new Date(day0 + Math.round(t * 1440) * 60_000).toISOString();
+  const dateOf = (t: number) => iso(Math.floor(t)).slice(0, 10);
   const dateAt = (days: number) => new Date(day0 - days * DAY_MS).toISOString().slice(0, 10);
   const uniform = (low: number, high: number) => low + rng.next() * (high - low);
-  const workOrder = () => (rng.chance(0.55) ? `WO-${rng.int(41000, 48999)}` : null);
+  const recordsBegan = -RECORDS_BEGAN_DAYS;
+  /** Work orders are numbered in the order they were raised, about ten a day. */
+  const workOrder = (t: number) => (rng.chance(0.55) ? `WO-${38000 + Math.round((t - recordsBegan) * 9.5) + rng.int(0, 40)}` : null);
+  const workingTime = (t: number, from = 7, to = 16) => Math.floor(t) + (from + rng.next() * (to - from)) * HOUR;
 
   const builders: Record<string, string[]> = { BFQ: [], CWM: [] };
   for (const [site, n] of [['BFQ', 3], ['CWM', 2]] as const) {
@@ -305,22 +277,27 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
   const equipment: EquipmentPlan[] = [];
   const positions: PositionPlan[] = [];
   const slots: Slot[] = [];
-  const meterOf = new Map<string, EquipmentTemplate['meter']>();
+  const readAtOf = new Map<string, number>();
+  const meterSpanDays = RECORDS_BEGAN_DAYS + LONGEST_LIFE_DAYS + 400;
   for (const site of SITE_TEMPLATES) {
     for (const service of SERVICE_CATALOGUE) siteServices.push({ siteCode: site.code, serviceCode: service.code, settings: defaultServiceSettings(service) });
     for (const area of site.areas) areas.push({ siteCode: site.code, ...area });
     for (const eq of site.equipment) {
-      const readDays = rng.int(1, 3);
+      const meter = eq.meter ? new HourMeter(streamFor(seed, `meter:${eq.assetNumber}`), eq.meter.hours, eq.meter.perDay, meterSpanDays) : null;
+      const readAt = -rng.int(1, 3) + 6 * HOUR;
+      readAtOf.set(eq.assetNumber, readAt);
       equipment.push({
         siteCode: site.code,
         areaCode: eq.area,
         assetNumber: eq.assetNumber,
         name: eq.name,
-        hasHourMeter: eq.meter != null,
-        hourMeterHours: eq.meter ? Math.round(eq.meter.hours - eq.meter.perDay * (readDays - 6 / 24)) : null,
-        hourMeterReadAt: eq.meter ? timeAt({ days: readDays, hour: 6 }) : null,
+        hasHourMeter: meter != null,
+        hourMeterHours: meter ? meter.at(readAt) : null,
+        hourMeterReadAt: meter ? iso(readAt) : null,
       });
-      meterOf.set(eq.assetNumber, eq.meter);
+      const firstRun = eq.commissionedDaysAgo != null ? -eq.commissionedDaysAgo : meter?.commissionedAt ?? null;
+      // The first hoses go on the record at the commissioning inspection, a day after the first run.
+      const commissionedAt = firstRun != null && firstRun > recordsBegan ? workingTime(firstRun + 1) : null;
       for (const t of eq.positions) {
         const construction = constructionByCode(t.construction);
         const code = `${eq.assetNumber}/${t.key}`;
@@ -349,62 +326,112 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
           notes: t.notes ?? (unsurveyed ? 'Routing not yet surveyed.' : null),
         };
         positions.push(position);
-        const life = LIFE[t.service]!;
-        slots.push({
-          position, template: t, equipment: eq, construction, etaDays: life.etaDays * (t.lifeFactor ?? 1), beta: life.beta,
-          vacant: false, vacantKind: 'recent', taggedOut: false, predates: false, recent: 0, scrapped: 0, returned: 0,
-        });
+        const model = LIFE_MODELS[construction.code];
+        if (!model) throw new Error(`No life model for the construction ${construction.code}`);
+        slots.push({ position, template: t, equipment: eq, construction, model, meter, commissionedAt, vacant: null, lives: [], tagOut: null });
       }
     }
   }
 
-  // ── Which positions are empty, tagged out, old, and which saw hoses come and go ─────────────
+  // ── Each position's lives, from before records began to the anchor ─────────────────────────
   const isOil = (s: Slot) => s.construction.code === NON_CONDUCTIVE_CONSTRUCTION;
-  const ordinary = (s: Slot) => !SPECIAL.has(s.position.code) && !isOil(s);
-  for (const s of pickSome(rng, slots.filter(ordinary), COUNTS.vacant)) s.vacant = true;
-  slots.forEach((s) => (s.predates = s.position.code === OVERAGE_POSITION));
-  const oldCandidates = slots.filter((s) => ordinary(s) && !s.vacant && LONG_LIVED.has(s.position.serviceCode));
-  for (const s of pickSome(rng, oldCandidates, COUNTS.predatesRecords)) s.predates = true;
-  for (const s of pickSome(rng, slots.filter((s) => ordinary(s) && !s.vacant), COUNTS.taggedOut)) s.taggedOut = true;
-  slots.filter((s) => s.vacant).forEach((s, i) => (s.vacantKind = i < COUNTS.recentRemovalsAtVacant ? 'recent' : 'scrapped'));
-  const recentPool = slots.filter((s) => ordinary(s) && !s.vacant && !s.predates);
-  for (const s of pickSome(rng, recentPool, COUNTS.recentRemovals - COUNTS.recentRemovalsAtVacant)) s.recent = 1;
-  const historyAllowed = (s: Slot) => s.position.code !== OVERRIDDEN_POSITION && s.position.code !== OVERAGE_POSITION && !s.predates;
-  for (const s of pickSome(rng, slots.filter((s) => historyAllowed(s) && !s.vacant), COUNTS.returnedToStock)) s.returned = 1;
-  const scrapTarget = COUNTS.scrappedRemovals - slots.filter((s) => s.vacant && s.vacantKind === 'scrapped').length;
-  for (let placed = 0; placed < scrapTarget; placed++) {
-    const pool = slots.filter((s) => historyAllowed(s) && s.recent + s.scrapped + s.returned < 3);
-    pickWeighted(rng, pool, (s) => 1 / s.etaDays).scrapped++;
+  const ordinary = (s: Slot) => !SPECIAL.has(s.position.code) && !isOil(s) && s.commissionedAt == null;
+  pickSome(rng, slots.filter(ordinary), COUNTS.vacant).forEach((s, i) => (s.vacant = i < COUNTS.vacantAwaitingRetest ? 'awaiting-retest' : 'scrapped'));
+  const badFrom = -BAD_BATCH.fromDays;
+  const badTo = -BAD_BATCH.toDays;
+  for (const slot of slots) {
+    const code = slot.position.code;
+    const history = streamFor(seed, `position:${code}`);
+    const service = serviceByCode(slot.position.serviceCode)!;
+    let emptiedAt: { t: number; reason: RemovalReason; note: string | null } | undefined;
+    if (slot.vacant) {
+      const t = workingTime(-history.int(3, 45));
+      if (slot.vacant === 'awaiting-retest') {
+        emptiedAt = { t, reason: history.pick(['relocated', 'obsolete'] as const), note: history.pick(VACANT_NOTES) };
+      } else {
+        const mode = drawMode(history, slot.model);
+        const reason = mode === 'worn' ? 'worn-at-inspection' : mode;
+        emptiedAt = { t, reason, note: failureNote(history, slot.position.serviceCode, slot.equipment.area, mode) };
+      }
+    }
+    slot.lives = simulatePosition(history, {
+      model: slot.model,
+      serviceCode: slot.position.serviceCode,
+      areaCode: slot.equipment.area,
+      intervalDays: slot.position.inspectionIntervalDays ?? inspectionIntervalDays(service.defaultInspectionIntervalDays, slot.position.criticality),
+      lowCriticality: slot.position.criticality === 'low',
+      recordsBegan,
+      commissionedAt: slot.commissionedAt,
+      badAt: (t) => slot.position.siteCode === BAD_BATCH.siteCode && slot.construction.code === BAD_BATCH.constructionCode && t >= badFrom && t < badTo,
+      ...(code === OVERAGE_POSITION ? { onlyLifeSince: workingTime(-OVERAGE_INSTALLED_DAYS) } : {}),
+      ...(code === OVERRIDDEN_POSITION ? { minCurrentAgeDays: 26 } : {}),
+      ...(code === PRESSURE_RAISED_POSITION || code === REROUTED_POSITION ? { minCurrentAgeDays: 120 } : {}),
+      ...(isOil(slot) ? { minCurrentAgeDays: 60 } : {}),
+      ...(emptiedAt ? { emptiedAt } : {}),
+    });
+  }
+  const currentLife = (s: Slot) => s.lives.find((l) => l.end == null) ?? null;
+
+  // A few hoses found faulty in the last days and tagged out: the inspection that found it, then the tag.
+  const tagOutPool = slots.filter((s) => ordinary(s) && !s.vacant && (currentLife(s)?.start ?? 0) <= -15);
+  for (const slot of pickSome(rng, tagOutPool, COUNTS.taggedOut)) {
+    const life = currentLife(slot)!;
+    const at = -rng.int(1, 9) + 13 * HOUR;
+    const notes = slot.template.ends.includes('CLW-DI') ? [...TAG_OUT_NOTES, CLAW_TAG_OUT_NOTE] : TAG_OUT_NOTES;
+    const note = rng.pick(notes);
+    life.inspections = life.inspections.filter((i) => i.t < at - 2 * HOUR);
+    life.inspections.push({ t: at - HOUR, result: 'defects', findings: [note.split('. ')[0]!.replace(/\.$/, '')], note: 'Tagged out.' });
+    slot.tagOut = { at, note };
   }
 
   // ── Assemblies ──────────────────────────────────────────────────────────────────────────────
   const assemblies: AssemblyPlan[] = [];
-  const hoursAt = (assetNumber: string, m: Moment): number | null => {
-    const meter = meterOf.get(assetNumber);
-    if (!meter) return null;
-    const hours = Math.round(meter.hours - meter.perDay * (m.days - m.hour / 24));
-    return hours > 50 ? hours : null;
+  const hoursAt = (slot: Slot, t: number): number | null => slot.meter?.at(t) ?? null;
+
+  // Bulk hose comes in batches: each site's hose shop works through one reel of a construction after another.
+  const batches = new Map<string, Array<{ fromDay: number; code: string; madeDay: number }>>();
+  const batchCode = (madeDay: number) => `L${dateOf(madeDay).slice(2, 7).replace('-', '')}-${rng.int(10, 99)}`;
+  const badMadeDay = badFrom - rng.int(30, 120);
+  const badBatch = { code: batchCode(badMadeDay), madeDay: badMadeDay };
+  const batchFor = (siteCode: string, constructionCode: string, day: number) => {
+    const key = `${siteCode}:${constructionCode}`;
+    let list = batches.get(key);
+    if (!list) {
+      list = [];
+      for (let from = recordsBegan - LONGEST_LIFE_DAYS; from < 0; from += rng.int(90, 300)) {
+        const madeDay = from - rng.int(20, 200);
+        let code = batchCode(madeDay);
+        while (code === badBatch.code) code = batchCode(madeDay);
+        list.push({ fromDay: from, madeDay, code });
+      }
+      batches.set(key, list);
+    }
+    return [...list].reverse().find((b) => b.fromDay <= day) ?? list[0]!;
   };
 
-  /** A new assembly built `builtDays` before the anchor, proof-tested no later than `testBy` days before it. */
-  const build = (t: PositionTemplate, siteCode: string, lengthMm: number, builtDays: number, testBy: number | null, estimated: boolean): AssemblyPlan => {
-    const construction = constructionByCode(t.construction);
+  /** A new assembly built on `builtDay`, proof-tested by `testByDay` when given. */
+  const build = (slot: Slot, builtDay: number, testByDay: number | null, options: { estimated?: boolean; bad?: boolean } = {}): AssemblyPlan => {
+    const { template: t, construction } = slot;
+    const siteCode = slot.position.siteCode;
+    const estimated = options.estimated ?? false;
     const [a, b] = [fittingSize(t.ends[0], construction.sizeCode), fittingSize(t.ends[1], construction.sizeCode)];
     const crimp = (spec: typeof a) =>
       spec.crimpDiameterMm == null ? null : Math.round((spec.crimpDiameterMm + (rng.next() * 2 - 1) * 0.6 * (spec.crimpToleranceMm ?? 0)) * 100) / 100;
-    const madeDays = estimated || rng.chance(0.12) ? null : builtDays + rng.int(20, 300);
+    const unrecorded = estimated || (slot.position.serviceCode !== 'slurry' && rng.chance(0.1));
+    const batch = unrecorded ? null : options.bad ? badBatch : batchFor(siteCode, construction.code, builtDay);
     const builder = estimated ? null : rng.pick(builders[siteCode]!);
+    const lengthMm = slot.position.requiredLengthMm;
     const plan: AssemblyPlan = {
       ref: assemblies.length,
       siteCode,
       constructionCode: construction.code,
       endA: { fittingCode: t.ends[0], crimpMm: crimp(a) },
       endB: { fittingCode: t.ends[1], crimpMm: crimp(b) },
-      hoseBatch: madeDays == null ? null : `L${dateAt(madeDays).slice(2, 7).replace('-', '')}-${rng.int(10, 99)}`,
-      hoseManufacturedOn: madeDays == null ? null : dateAt(madeDays),
+      hoseBatch: batch?.code ?? null,
+      hoseManufacturedOn: batch ? dateOf(batch.madeDay) : null,
       overallLengthMm: lengthMm,
       cutLengthMm: lengthMm - a.allowanceMm - b.allowanceMm,
-      builtOn: dateAt(builtDays),
+      builtOn: dateOf(builtDay),
       builtOnEstimated: estimated,
       builder,
       cost: estimated ? null : Math.round(((lengthMm / 1000) * HOSE_PRICE_PER_M[construction.code]! + a.price + b.price + LABOUR_PER_ASSEMBLY) * 100) / 100,
@@ -414,12 +441,12 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
       steps: [],
       status: 'built',
     };
-    if (testBy != null) {
+    if (testByDay != null) {
       plan.steps.push({
         kind: 'proof_test',
-        testedOn: dateAt(estimated ? builtDays : Math.max(testBy, builtDays - rng.int(0, 2))),
+        testedOn: dateOf(estimated ? builtDay : Math.min(testByDay, builtDay + rng.int(0, 2))),
         medium: t.service === 'hydraulic-suction-return' ? 'hydraulic-oil' : 'water',
-        heldPressureKpa: Math.ceil((construction.burstPressureKpa / 2) * (1 + rng.next() * 0.03) / 10) * 10,
+        heldPressureKpa: Math.ceil(((construction.burstPressureKpa / 2) * (1 + rng.next() * 0.03)) / 10) * 10,
         holdSeconds: rng.pick([60, 60, 60, 120, 30]),
         result: 'pass',
         tester: builder ?? 'Hose shop',
@@ -431,141 +458,168 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
     return plan;
   };
 
-  const install = (plan: AssemblyPlan, slot: Slot, m: Moment, estimated: boolean, override: OverridePlan | null = null) => {
+  const latestReading = new Map<string, { t: number; hours: number }>();
+  const noteReading = (slot: Slot, t: number, hours: number | null) => {
+    if (hours == null) return;
+    const seen = latestReading.get(slot.equipment.assetNumber);
+    if (!seen || seen.t < t) latestReading.set(slot.equipment.assetNumber, { t, hours });
+  };
+
+  // Every life across the register in the order it began, so a re-tested assembly can be fitted again later.
+  const lives = slots.flatMap((slot) => slot.lives.map((life) => ({ slot, life })));
+  lives.sort((x, y) => x.life.start - y.life.start);
+  const shelf: Returned[] = [];
+  const badRemovals: Array<{ plan: AssemblyPlan; step: Extract<AssemblyStep, { kind: 'remove' }>; days: number; t: number }> = [];
+  const badPositions = new Set<string>();
+  for (const { slot, life } of lives) {
+    const { position } = slot;
+    const startDay = Math.floor(life.start);
+    let plan: AssemblyPlan;
+    const fits = (r: Returned) =>
+      r.siteCode === position.siteCode && r.constructionCode === slot.construction.code && r.positionCode !== position.code && r.availableAt < life.start - 0.5 &&
+      Math.abs((r.plan.overallLengthMm - position.requiredLengthMm) / position.requiredLengthMm) <= 0.15 &&
+      // A construction with a storage limit counts the time since the build, so an old assembly is not fitted again.
+      (slot.construction.storageLifeMonths == null || life.start - (Date.parse(r.plan.builtOn) - day0) / DAY_MS < slot.construction.storageLifeMonths * 30 - 15);
+    const reusable = life.estimated || life.bad ? -1 : shelf.findIndex(fits);
+    if (life.estimated) {
+      plan = build(slot, startDay - rng.int(3, 20), startDay, { estimated: true });
+    } else if (reusable >= 0 && rng.chance(REUSE_CHANCE)) {
+      plan = shelf.splice(reusable, 1)[0]!.plan;
+    } else {
+      const builtDay = Math.max(Math.min(startDay - 1, recordsBegan), startDay - rng.int(1, 40));
+      plan = build(slot, builtDay, startDay - 1, { bad: life.bad });
+    }
+    if (life.bad) badPositions.add(position.code);
+    const installHours = life.estimated ? null : hoursAt(slot, life.start);
+    noteReading(slot, life.start, installHours);
     // Nothing was written down for a hose fitted before records began: no work order, no meter reading.
     plan.steps.push({
-      kind: 'install', at: timeAt(m), estimated, positionCode: slot.position.code, hourMeterHours: estimated ? null : hoursAt(slot.equipment.assetNumber, m),
-      workOrder: estimated ? null : workOrder(), note: null, override,
+      kind: 'install', at: iso(life.start), estimated: life.estimated, positionCode: position.code, hourMeterHours: installHours,
+      workOrder: life.estimated ? null : workOrder(life.start), note: null,
+      override: position.code === OVERRIDDEN_POSITION && life.end == null ? { checks: ['bend-radius'], reason: OVERRIDE_REASON, reviewOn: dateAt(-30) } : null,
     });
     plan.status = 'installed';
-    plan.predatesRecords = estimated;
-  };
-  const remove = (plan: AssemblyPlan, slot: Slot, m: Moment, reason: RemovalReason, note: string | null) => {
-    plan.steps.push({ kind: 'remove', at: timeAt(m), reason, hourMeterHours: hoursAt(slot.equipment.assetNumber, m), workOrder: workOrder(), note });
+    if (life.estimated) plan.predatesRecords = true;
+    for (const inspection of life.inspections) {
+      const hours = hoursAt(slot, inspection.t);
+      noteReading(slot, inspection.t, hours);
+      plan.steps.push({
+        kind: 'inspection', at: iso(inspection.t), positionCode: position.code, result: inspection.result, findings: inspection.findings, note: inspection.note, hourMeterHours: hours,
+      });
+    }
+    if (life.end == null) {
+      if (slot.tagOut) {
+        plan.steps.push({ kind: 'tag_out', at: iso(slot.tagOut.at), note: slot.tagOut.note, workOrder: workOrder(slot.tagOut.at) });
+        plan.status = 'tagged_out';
+      }
+      continue;
+    }
+
+    const end = life.end;
+    const reason = life.reason!;
+    const removeHours = hoursAt(slot, end);
+    noteReading(slot, end, removeHours);
+    const note = life.note ?? (reason === 'planned-replacement' ? rng.pick(PLANNED_NOTES) : reason === 'relocated' ? rng.pick(RELOCATED_NOTES) : null);
+    const removal: Extract<AssemblyStep, { kind: 'remove' }> = { kind: 'remove', at: iso(end), reason, hourMeterHours: removeHours, workOrder: workOrder(end), note };
+    plan.steps.push(removal);
     plan.status = 'removed';
-  };
+    if (life.bad && reason !== 'relocated') badRemovals.push({ plan, step: removal, days: end - life.start, t: end });
 
-  const currentStarts = new Map<string, number>();
-  for (const slot of slots) {
-    const code = slot.position.code;
-    const history: Array<'recent' | 'scrapped' | 'returned'> = [];
-    if (slot.vacant) history.push(slot.vacantKind);
-    if (slot.recent) history.push('recent');
-    for (let i = 0; i < slot.returned; i++) history.push('returned');
-    for (let i = 0; i < slot.scrapped; i++) history.push('scrapped');
-
-    let boundary: Moment;
-    if (slot.vacant) {
-      boundary = { days: rng.int(3, 45), hour: rng.int(7, 15) };
-    } else {
-      let startDays: number;
-      if (code === OVERAGE_POSITION) startDays = OVERAGE_INSTALLED_DAYS;
-      else if (slot.predates) startDays = RECORDS_BEGAN_DAYS + rng.int(60, 700);
-      else if (code === OVERRIDDEN_POSITION) startDays = 26;
-      else if (slot.recent) startDays = rng.int(4, 75);
-      else {
-        const least = code === PRESSURE_RAISED_POSITION || code === REROUTED_POSITION ? 120 : isOil(slot) ? 60 : slot.returned ? 30 : slot.taggedOut ? 12 : 8;
-        startDays = Math.min(RECORDS_BEGAN_DAYS - 30, Math.max(least, Math.round(slot.etaDays * uniform(0.05, 0.95))));
-      }
-      boundary = { days: startDays, hour: rng.int(7, 15) };
-      currentStarts.set(code, startDays);
-      const builtDays = startDays + (slot.predates ? rng.int(3, 20) : rng.int(2, 45));
-      const current = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, builtDays, startDays + 1, slot.predates);
-      const override = code === OVERRIDDEN_POSITION ? { checks: ['bend-radius' as const], reason: OVERRIDE_REASON, reviewOn: dateAt(-30) } : null;
-      install(current, slot, boundary, slot.predates, override);
-      if (slot.taggedOut) {
-        const notes = slot.template.ends.includes('CLW-DI') ? [...TAG_OUT_NOTES, CLAW_TAG_OUT_NOTE] : TAG_OUT_NOTES;
-        current.steps.push({ kind: 'tag_out', at: timeAt({ days: rng.int(1, Math.min(9, startDays - 1)), hour: 13 }), note: rng.pick(notes), workOrder: workOrder() });
-        current.status = 'tagged_out';
-      }
-    }
-
-    for (const kind of history) {
-      const removal = boundary;
-      const lifeDays = Math.round(Math.min(3 * slot.etaDays, Math.max(15, slot.etaDays * Math.pow(-Math.log(1 - rng.next()), 1 / slot.beta))));
-      const start: Moment = { days: removal.days + lifeDays, hour: rng.int(7, 15) };
-      const predates = start.days > RECORDS_BEGAN_DAYS;
-      const plan = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, start.days + (predates ? rng.int(3, 20) : rng.int(2, 45)), start.days + 1, predates);
-      install(plan, slot, start, predates);
-      if (kind === 'scrapped') {
-        const roll = rng.next();
-        const reason: RemovalReason = roll < 0.35 ? 'failure' : roll < 0.7 ? 'worn-at-inspection' : 'damaged';
-        const specific = SERVICE_FAILURE_NOTES[slot.position.serviceCode];
-        const note =
-          reason === 'failure'
-            ? rng.pick(specific && rng.chance(0.6) ? specific : FAILURE_NOTES)
-            : reason === 'damaged'
-              ? rng.pick(MOBILE_AREAS.has(slot.equipment.area) ? [...DAMAGED_NOTES, ...MOBILE_DAMAGED_NOTES] : DAMAGED_NOTES)
-              : rng.pick(WORN_NOTES);
-        remove(plan, slot, removal, reason, note);
-        plan.steps.push({ kind: 'scrap', at: timeAt({ days: Math.max(1, removal.days - rng.int(1, 10)), hour: 16 }), note: rng.pick(SCRAP_NOTES) });
+    // What the hose shop did with it: failures are kept for the failure review, then scrapped; a hose
+    // taken off in good order is re-tested and goes back on the shelf. Some are still waiting today.
+    const endDay = Math.floor(end);
+    const emptiedHere = slot.vacant != null && life === slot.lives[slot.lives.length - 1];
+    if (emptiedHere && slot.vacant === 'awaiting-retest') continue;
+    if (reason === 'relocated' || reason === 'obsolete') {
+      const testDay = endDay + rng.int(3, 90);
+      const returnAt = testDay + 15 * HOUR;
+      if (returnAt >= 0) continue;
+      const passed = !rng.chance(0.08);
+      const testPressureKpa = Math.ceil(slot.construction.burstPressureKpa / 2 / 10) * 10;
+      plan.steps.push({
+        kind: 'proof_test', testedOn: dateOf(testDay), medium: position.serviceCode === 'hydraulic-suction-return' ? 'hydraulic-oil' : 'water',
+        heldPressureKpa: passed ? testPressureKpa : Math.round((testPressureKpa * 0.8) / 10) * 10, holdSeconds: passed ? 60 : 15, result: passed ? 'pass' : 'fail',
+        tester: rng.pick(builders[position.siteCode]!), note: passed ? 'Re-test after removal.' : 'Re-test after removal: weeping at the end A ferrule at 80 % of the test pressure; test stopped.',
+      });
+      if (!passed) {
+        plan.steps.push({ kind: 'scrap', at: iso(testDay + 16 * HOUR), note: RETEST_FAILED_NOTE });
         plan.status = 'scrapped';
-      } else if (kind === 'recent') {
-        const reason: RemovalReason = slot.vacant
-          ? rng.pick(['relocated', 'obsolete'] as const)
-          : rng.pick(['planned-replacement', 'planned-replacement', 'planned-replacement', 'worn-at-inspection', 'damaged', 'relocated'] as const);
-        remove(plan, slot, removal, reason, slot.vacant ? rng.pick(VACANT_NOTES) : rng.pick(RECENT_NOTES[reason]));
-      } else {
-        const reason: RemovalReason = rng.pick(['relocated', 'planned-replacement'] as const);
-        remove(plan, slot, removal, reason, rng.pick(RECENT_NOTES[reason]));
-        const testDays = removal.days - rng.int(1, Math.min(6, removal.days - 2));
-        plan.steps.push({
-          kind: 'proof_test',
-          testedOn: dateAt(testDays),
-          medium: slot.position.serviceCode === 'hydraulic-suction-return' ? 'hydraulic-oil' : 'water',
-          heldPressureKpa: Math.ceil(slot.construction.burstPressureKpa / 2 / 10) * 10,
-          holdSeconds: 60,
-          result: 'pass',
-          tester: rng.pick(builders[slot.position.siteCode]!),
-          note: 'Re-test after removal.',
-        });
-        plan.steps.push({ kind: 'return_to_stock', at: timeAt({ days: Math.max(1, testDays - rng.int(0, 2)), hour: 15 }), storeLocation: storeLocation(slot.position.siteCode), inspectionNote: rng.pick(RETURN_NOTES) });
-        plan.status = 'in_stock';
+        continue;
       }
-      boundary = start;
-      if (predates) break; // nothing before records began is known
+      const location = storeLocation(position.siteCode);
+      plan.steps.push({ kind: 'return_to_stock', at: iso(returnAt), storeLocation: location, inspectionNote: rng.pick(RETURN_NOTES) });
+      plan.status = 'in_stock';
+      shelf.push({ plan, availableAt: returnAt, siteCode: position.siteCode, constructionCode: slot.construction.code, positionCode: position.code });
+      continue;
     }
+    const delayDays = emptiedHere
+      ? rng.int(1, Math.max(1, -endDay - 1))
+      : reason === 'planned-replacement' ? rng.int(0, 10) : reason === 'failure' ? rng.int(7, 150) : reason === 'damaged' ? rng.int(3, 90) : rng.int(2, 45);
+    let scrapAt = endDay + delayDays + 16 * HOUR;
+    if (scrapAt <= end) scrapAt += 1;
+    if (scrapAt >= 0) continue;
+    plan.steps.push({ kind: 'scrap', at: iso(scrapAt), note: reason === 'planned-replacement' ? PLANNED_SCRAP_NOTE : rng.pick(SCRAP_NOTES) });
+    plan.status = 'scrapped';
   }
+
+  // The bad batch, as the reliability engineer came to see it, one early failure after another.
+  badRemovals.sort((x, y) => x.t - y.t);
+  badRemovals.forEach(({ step, days }, i) => {
+    const weeks = Math.max(1, Math.round(days / 7));
+    const tail = i === 0 ? `hose batch ${badBatch.code}; reported to the supplier` : `hose batch ${badBatch.code} again, early failure ${i + 1} from it`;
+    step.note = `${step.note ?? 'Worn through.'} ${weeks} week${weeks === 1 ? '' : 's'} in service; ${tail}.`;
+  });
 
   // ── Stock, the hose shop's queue, and what was scrapped from the shelf ──────────────────────
   const stockable = slots.filter((s) => !isOil(s) && s.position.code !== OVERRIDDEN_POSITION);
+  const onShelf = assemblies.filter((a) => a.status === 'in_stock').length;
   // Spares per construction follow how many a year the positions use up, at least one of each.
-  for (const [code, count] of Object.entries(spareCounts(stockable, COUNTS.newStock))) {
+  for (const [code, count] of Object.entries(spareCounts(stockable, Math.max(20, COUNTS.inStock - onShelf)))) {
     const users = stockable.filter((s) => s.construction.code === code);
     for (let i = 0; i < count; i++) {
       const slot = rng.pick(users);
-      const plan = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, rng.int(5, 320), 1, false);
+      const plan = build(slot, -rng.int(5, 320), -1);
       plan.storeLocation = storeLocation(slot.position.siteCode);
     }
   }
   for (let i = 0; i < COUNTS.awaitingProofTest; i++) {
     const slot = rng.pick(stockable);
-    const plan = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, rng.int(1, 6), null, false);
+    const plan = build(slot, -rng.int(1, 6), null);
     plan.storeLocation = 'Hose shop, awaiting proof test';
   }
   {
     const slot = rng.pick(stockable.filter((s) => s.template.ends.includes('CRP-ST')));
     const builtDays = rng.int(20, 60);
-    const plan = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, builtDays, null, false);
+    const plan = build(slot, -builtDays, null);
     plan.steps.push({
-      kind: 'proof_test', testedOn: dateAt(builtDays - 1), medium: 'water', heldPressureKpa: Math.round((slot.construction.burstPressureKpa / 2) * 0.85 / 10) * 10,
+      kind: 'proof_test', testedOn: dateAt(builtDays - 1), medium: 'water', heldPressureKpa: Math.round(((slot.construction.burstPressureKpa / 2) * 0.85) / 10) * 10,
       holdSeconds: 20, result: 'fail', tester: plan.builder ?? 'Hose shop', note: 'Weeping at the end B ferrule at 85 % of the test pressure; test stopped.',
     });
-    plan.steps.push({ kind: 'scrap', at: timeAt({ days: builtDays - 3, hour: 16 }), note: 'Failed its proof test at the ferrule. Fittings cannot be re-used after crimping; scrapped.' });
+    plan.steps.push({ kind: 'scrap', at: iso(-(builtDays - 3) + 16 * HOUR), note: 'Failed its proof test at the ferrule. Fittings cannot be re-used after crimping; scrapped.' });
     plan.status = 'scrapped';
   }
   const hydraulicStock = stockable.filter((s) => s.position.serviceCode === 'hydraulic-suction-return');
   for (let i = 0; i < COUNTS.storageExpired; i++) {
     const slot = rng.pick(hydraulicStock);
     const builtDays = rng.int(745, 790);
-    const plan = build(slot.template, slot.position.siteCode, slot.position.requiredLengthMm, builtDays, builtDays - 2, false);
+    const plan = build(slot, -builtDays, -(builtDays - 2));
     plan.storeLocation = storeLocation(slot.position.siteCode);
-    plan.steps.push({ kind: 'scrap', at: timeAt({ days: rng.int(5, 40), hour: 16 }), note: 'In store longer than the 24-month storage limit for hydraulic assemblies; scrapped rather than fitted.' });
+    plan.steps.push({ kind: 'scrap', at: iso(-rng.int(5, 40) + 16 * HOUR), note: 'In store longer than the 24-month storage limit for hydraulic assemblies; scrapped rather than fitted.' });
     plan.status = 'scrapped';
   }
 
+  // The equipment's latest reading is the newest one any event brought.
+  for (const eq of equipment) {
+    const latest = latestReading.get(eq.assetNumber);
+    if (latest && eq.hasHourMeter && latest.t > readAtOf.get(eq.assetNumber)!) {
+      eq.hourMeterHours = latest.hours;
+      eq.hourMeterReadAt = iso(latest.t);
+    }
+  }
+
   // ── Later changes to what the checks look at ────────────────────────────────────────────────
-  const changeBefore = (code: string, least: number) => timeAt({ days: rng.int(least, currentStarts.get(code)! - 20), hour: 10 });
+  const currentStartDays = (code: string) => Math.floor(-currentLife(slots.find((s) => s.position.code === code)!)!.start);
+  const changeBefore = (code: string, least: number) => iso(-rng.int(least, currentStartDays(code) - 20) + 10 * HOUR);
   const positionChanges: PositionChangePlan[] = [
     {
       positionCode: PRESSURE_RAISED_POSITION,
@@ -580,12 +634,12 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
       reason: 'Discharge re-routed under the new ventilation duct at the pump station; tightest bend re-measured at 450 mm.',
     },
   ];
-  const oilStart = Math.min(...slots.filter((s) => isOil(s) && !s.vacant).map((s) => currentStarts.get(s.position.code)!));
+  const oilStart = Math.min(...slots.filter((s) => isOil(s) && currentLife(s)).map((s) => currentStartDays(s.position.code)));
   const oilTestDays = rng.int(5, oilStart - 10);
   const constructionChanges: ConstructionChangePlan[] = [
     {
       constructionCode: NON_CONDUCTIVE_CONSTRUCTION,
-      at: timeAt({ days: oilTestDays, hour: 11 }),
+      at: iso(-oilTestDays + 11 * HOUR),
       set: {
         electrical: 'none',
         notes: `Bought for the lube reels. Continuity test on ${dateAt(oilTestDays)}: open circuit end to end on both reels. Not conductive: not for fuel or oil dispensing.`,
@@ -611,20 +665,24 @@ export function planRegister(seed: number, anchor: Date): RegisterPlan {
     assemblies,
     positionChanges,
     constructionChanges,
+    history: {
+      recordsBeganOn: dateAt(RECORDS_BEGAN_DAYS),
+      badBatch: { siteCode: BAD_BATCH.siteCode, constructionCode: BAD_BATCH.constructionCode, hoseBatch: badBatch.code, positionCodes: [...badPositions].sort() },
+    },
   };
 }
 
 /** `total` spares shared among the constructions in proportion to the assemblies their positions use a year, at least one each (largest remainders). */
 function spareCounts(slots: readonly Slot[], total: number): Record<string, number> {
   const usePerYear = new Map<string, number>();
-  for (const s of slots) usePerYear.set(s.construction.code, (usePerYear.get(s.construction.code) ?? 0) + 365 / s.etaDays);
+  for (const s of slots) usePerYear.set(s.construction.code, (usePerYear.get(s.construction.code) ?? 0) + 365 / Math.min(s.model.etaDays, s.model.plannedReplacementDays ?? Infinity));
   const codes = [...usePerYear.keys()].sort();
   const sum = codes.reduce((n, c) => n + usePerYear.get(c)!, 0);
-  const share = (c: string) => ((total - codes.length) * usePerYear.get(c)!) / sum;
+  const share = (c: string) => (Math.max(0, total - codes.length) * usePerYear.get(c)!) / sum;
   const counts = Object.fromEntries(codes.map((c) => [c, 1 + Math.floor(share(c))]));
   const left = total - Object.values(counts).reduce((n, c) => n + c, 0);
   const byRemainder = [...codes].sort((a, b) => (share(b) % 1) - (share(a) % 1) || a.localeCompare(b));
-  for (const c of byRemainder.slice(0, left)) counts[c]! += 1;
+  for (const c of byRemainder.slice(0, Math.max(0, left))) counts[c]! += 1;
   return counts;
 }
 
@@ -634,15 +692,4 @@ function pickSome<T>(rng: Random, pool: readonly T[], n: number): T[] {
   const out: T[] = [];
   while (out.length < n && left.length > 0) out.push(left.splice(Math.floor(rng.next() * left.length), 1)[0]!);
   return out;
-}
-
-/** One item of `pool`, drawn with chances proportional to `weight`. */
-function pickWeighted<T>(rng: Random, pool: readonly T[], weight: (item: T) => number): T {
-  const total = pool.reduce((sum, item) => sum + weight(item), 0);
-  let roll = rng.next() * total;
-  for (const item of pool) {
-    roll -= weight(item);
-    if (roll < 0) return item;
-  }
-  return pool[pool.length - 1]!;
 }

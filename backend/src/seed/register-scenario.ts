@@ -1,36 +1,24 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { ServiceSettings } from '../../../shared/src/services/service-catalogue.js';
 import type { Config } from '../config.js';
 import type { AppContext } from '../context.js';
 import { Area, Assembly, Construction, Equipment, FittingType, Position, Site, SiteService, User } from '../entities/index.js';
 import { createLogger } from '../lib/logger.js';
 import type { Actor } from '../policies/actor.js';
-import {
-  buildAssembly,
-  installAssembly,
-  recordProofTest,
-  removeAssembly,
-  returnToStock,
-  scrapAssembly,
-  tagOutAssembly,
-} from '../services/assemblies.service.js';
+import { installAssembly, tagOutAssembly } from '../services/assemblies.service.js';
 import { recomputeStoredOutcomes } from '../services/assembly-checks.service.js';
 import { recordAudit } from '../services/audit.service.js';
-import { planRegister, type AssemblyPlan, type AssemblyStep, type RegisterPlan } from './register-plan.js';
+import { lastInstallIndex, stepAtOf, stepsInOrder, writeAssemblies, writeInspections, type BulkContext } from './register-bulk.js';
+import { planRegister, RECORDS_BEGAN_DAYS, type AssemblyPlan, type RegisterPlan } from './register-plan.js';
 
 // Writes the demo's register in the seed's transaction: the catalogue, sites' areas, equipment and
-// positions straight into their tables, then every assembly's history through the same lifecycle
-// functions the API uses, in the order it happened, with the clock held at the anchor.
+// positions straight into their tables; then every assembly in bulk (the three years of past
+// lives, the stock, the hose shop's queue, and the hoses in place up to their install); then the
+// installs and tag-outs of the hoses in place at the anchor through the same lifecycle functions
+// the API uses, with the clock held at the anchor; then their inspections and stored outcomes.
 
-/** Steps that share a moment run in this order: a removal frees the position the next install takes. */
-const STEP_ORDER: Record<AssemblyStep['kind'] | 'build', number> = {
-  build: 0,
-  proof_test: 1,
-  remove: 2,
-  scrap: 3,
-  return_to_stock: 4,
-  install: 5,
-  tag_out: 6,
-};
+/** Whether an assembly is in a position at the anchor: its install goes through the lifecycle functions. */
+const inPlace = (a: AssemblyPlan) => a.status === 'installed' || a.status === 'tagged_out';
 
 /** The session the seed acts in; it is never stored. */
 const SEED_SESSION_ID = '00000000-0000-4000-8000-000000000001';
@@ -97,55 +85,18 @@ export async function writeRegister(ds: DataSource, manager: EntityManager, plan
   const fittingIds = await insertAll(manager, FittingType, plan.fittingTypes.map((f) => ({ ...f })));
   const fittingId = new Map(plan.fittingTypes.map((f, i) => [f.code, fittingIds[i]!]));
 
-  // Every assembly's steps, in the order they happened across the whole register.
-  const queue: Array<{ atMs: number; order: number; assembly: AssemblyPlan; step: AssemblyStep | null }> = [];
-  for (const assembly of plan.assemblies) {
-    queue.push({ atMs: Date.parse(`${assembly.builtOn}T12:00:00Z`), order: STEP_ORDER.build, assembly, step: null });
-    for (const step of assembly.steps) {
-      const at = step.kind === 'proof_test' ? `${step.testedOn}T12:00:00Z` : step.at;
-      queue.push({ atMs: Date.parse(at), order: STEP_ORDER[step.kind], assembly, step });
-    }
-  }
-  queue.sort((a, b) => a.atMs - b.atMs || a.order - b.order || a.assembly.ref - b.assembly.ref);
+  const bulk = await bulkContext(manager, plan, { siteId, positionIds: positionId, constructionIds: constructionId, fittingIds: fittingId, anchor, fallbackActorId: actor.id });
+  const assemblyId = await writeAssemblies(manager, bulk, plan.assemblies, inPlace);
 
-  const assemblyId = new Map<number, string>();
-  const fieldDefaults = { occurredAtEstimated: false, workOrder: null, hourMeterHours: null, note: null };
-  for (const { assembly, step } of queue) {
-    if (step === null) {
-      const built = await buildAssembly(ctx, manager, actor, {
-        constructionId: constructionId.get(assembly.constructionCode)!,
-        siteId: siteId(assembly.siteCode),
-        storeLocation: assembly.storeLocation,
-        hoseBatch: assembly.hoseBatch,
-        hoseManufacturedOn: assembly.hoseManufacturedOn,
-        overallLength: assembly.overallLengthMm,
-        cutLength: assembly.cutLengthMm,
-        endA: { fittingTypeId: fittingId.get(assembly.endA.fittingCode)!, crimpDiameter: assembly.endA.crimpMm },
-        endB: { fittingTypeId: fittingId.get(assembly.endB.fittingCode)!, crimpDiameter: assembly.endB.crimpMm },
-        builtOn: assembly.builtOn,
-        builtOnEstimated: assembly.builtOnEstimated,
-        builder: assembly.builder,
-        cost: assembly.cost,
-        note: assembly.note,
-      });
-      assemblyId.set(assembly.ref, built.id);
-      continue;
-    }
-    const id = assemblyId.get(assembly.ref)!;
-    switch (step.kind) {
-      case 'proof_test':
-        await recordProofTest(ctx, manager, actor, id, {
-          testedOn: step.testedOn,
-          medium: step.medium,
-          requiredPressure: null,
-          heldPressure: step.heldPressureKpa,
-          holdSeconds: step.holdSeconds,
-          result: step.result,
-          tester: step.tester,
-          note: step.note,
-        });
-        break;
-      case 'install':
+  // The hoses in place at the anchor go in through the lifecycle functions, in the order they went in.
+  const installed = plan.assemblies.filter(inPlace).map((a) => {
+    const steps = stepsInOrder(a);
+    return { plan: a, id: assemblyId.get(a.ref)!, tail: steps.slice(lastInstallIndex(steps)) };
+  });
+  installed.sort((x, y) => Date.parse(stepAtOf(x.tail[0]!)) - Date.parse(stepAtOf(y.tail[0]!)) || x.plan.ref - y.plan.ref);
+  for (const { id, tail } of installed) {
+    for (const step of tail) {
+      if (step.kind === 'install') {
         await installAssembly(ctx, manager, actor, id, {
           positionId: positionId.get(step.positionCode)!,
           occurredAt: step.at,
@@ -157,28 +108,14 @@ export async function writeRegister(ds: DataSource, manager: EntityManager, plan
         });
         // Nothing in the lifecycle says a hose was there before records began: the register marks it afterwards.
         if (step.estimated) await manager.getRepository(Assembly).update({ id }, { predatesRecords: true });
-        break;
-      case 'remove':
-        await removeAssembly(ctx, manager, actor, id, {
-          reason: step.reason,
-          occurredAt: step.at,
-          occurredAtEstimated: false,
-          workOrder: step.workOrder,
-          hourMeterHours: step.hourMeterHours,
-          note: step.note,
-        });
-        break;
-      case 'tag_out':
-        await tagOutAssembly(ctx, manager, actor, id, { ...fieldDefaults, occurredAt: step.at, workOrder: step.workOrder, note: step.note });
-        break;
-      case 'scrap':
-        await scrapAssembly(ctx, manager, actor, id, { ...fieldDefaults, occurredAt: step.at, note: step.note });
-        break;
-      case 'return_to_stock':
-        await returnToStock(ctx, manager, actor, id, { ...fieldDefaults, occurredAt: step.at, storeLocation: step.storeLocation, inspectionNote: step.inspectionNote });
-        break;
+      } else if (step.kind === 'tag_out') {
+        await tagOutAssembly(ctx, manager, actor, id, { occurredAtEstimated: false, hourMeterHours: null, occurredAt: step.at, workOrder: step.workOrder, note: step.note });
+      } else if (step.kind !== 'inspection') {
+        throw new Error(`A hose in place at the anchor takes the step ${step.kind} after its install`);
+      }
     }
   }
+  await writeInspections(manager, bulk, installed);
 
   // Later changes of design conditions and records, as an engineer would make them: audited, then the stored outcomes recomputed.
   for (const change of plan.positionChanges) {
@@ -202,6 +139,48 @@ export async function writeRegister(ds: DataSource, manager: EntityManager, plan
     await recordAudit(manager, { actorId: actor.id, action: 'construction.updated', entityType: 'construction', entityId: id, before, after: { ...after, reason: change.reason }, at: new Date(change.at) });
     await recomputeStoredOutcomes(manager, { constructionIds: [id] }, anchor);
   }
+
+  // With the inspections in, every hose in place gets its stored outcome and next inspection due date afresh.
+  await recomputeStoredOutcomes(manager, { assemblyIds: installed.map(({ id }) => id) }, anchor);
+}
+
+/** The ids, catalogue rows and people the bulk writer needs, loaded once. */
+async function bulkContext(
+  manager: EntityManager,
+  plan: RegisterPlan,
+  ids: {
+    siteId: (code: string) => string;
+    positionIds: Map<string, string>;
+    constructionIds: Map<string, string>;
+    fittingIds: Map<string, string>;
+    anchor: Date;
+    fallbackActorId: string;
+  },
+): Promise<BulkContext> {
+  const byId = <T extends { id: string }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]));
+  const positionRows = byId(await manager.getRepository(Position).findBy({ id: In([...ids.positionIds.values()]) }));
+  const constructionRows = byId(await manager.getRepository(Construction).findBy({ id: In([...ids.constructionIds.values()]) }));
+  const fittingRows = byId(await manager.getRepository(FittingType).findBy({ id: In([...ids.fittingIds.values()]) }));
+  const siteIds = [...new Set(plan.positions.map((p) => ids.siteId(p.siteCode)))];
+  const services = new Map<string, ServiceSettings>();
+  for (const row of await manager.getRepository(SiteService).findBy({ siteId: In(siteIds) })) services.set(`${row.siteId}:${row.serviceCode}`, row.settings);
+  const technicians: Array<{ id: string; site_ids: string[] }> = await manager.query(
+    `SELECT id, site_ids FROM users WHERE role = 'technician' AND password_hash IS NOT NULL AND site_ids && $1::uuid[] ORDER BY email`,
+    [siteIds],
+  );
+  const recorders = new Map(siteIds.map((site) => [site, technicians.filter((t) => t.site_ids.includes(site)).map((t) => t.id)]));
+  const day0 = Date.UTC(ids.anchor.getUTCFullYear(), ids.anchor.getUTCMonth(), ids.anchor.getUTCDate());
+  return {
+    siteId: ids.siteId,
+    positions: new Map([...ids.positionIds].map(([code, id]) => [code, positionRows.get(id)!])),
+    constructions: new Map([...ids.constructionIds].map(([code, id]) => [code, constructionRows.get(id)!])),
+    fittings: new Map([...ids.fittingIds].map(([code, id]) => [code, fittingRows.get(id)!])),
+    services,
+    recorders,
+    fallbackActorId: ids.fallbackActorId,
+    recordsBegan: new Date(day0 - RECORDS_BEGAN_DAYS * 86_400_000 + 9 * 3_600_000),
+    anchor: ids.anchor,
+  };
 }
 
 /** Inserts rows in one statement and returns their new ids, in order. */

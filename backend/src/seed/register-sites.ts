@@ -23,16 +23,16 @@ export interface PositionTemplate {
   bendMm?: number | 'unsurveyed';
   inspectionIntervalDays?: number;
   notes?: string;
-  /** Multiplies the service's typical hose life at this position. */
-  lifeFactor?: number;
 }
 
 export interface EquipmentTemplate {
   assetNumber: string;
   name: string;
   area: string;
-  /** Hour meter at the anchor and hours run per day; absent when the machine has no meter. */
+  /** Hour meter at the anchor and the hours it runs on an ordinary day; absent when the machine has no meter. */
   meter?: { hours: number; perDay: number };
+  /** Days before the anchor the equipment was first run, for equipment without a meter that is newer than the records. */
+  commissionedDaysAgo?: number;
   positions: readonly PositionTemplate[];
 }
 
@@ -53,7 +53,7 @@ function air(key: string, name: string, size: 19 | 25, claw: boolean, o: Options
     key, name, service: 'compressed-air', medium: 'compressed-air-oil-mist', construction: size === 19 ? 'AIR-19-TX' : 'AIR-25-TX',
     ends: claw ? ['CLW-DI', 'CLW-DI'] : ['CRP-ST', 'CRP-ST'],
     connections: claw ? [`${bore} claw coupling`, `${bore} claw coupling`] : [`${bore} BSP male`, `${bore} BSP male`],
-    mopKpa: [700, 900], tempC: OUTDOOR, lengthM: [10, 20], suction: false, criticality: 'high', lifeFactor: 0.75, ...o,
+    mopKpa: [700, 900], tempC: OUTDOOR, lengthM: [10, 20], suction: false, criticality: 'high', ...o,
   };
 }
 
@@ -158,7 +158,7 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       },
       {
         assetNumber: 'BFQ-RB-01', name: 'Pedestal rock breaker at the primary', area: 'PCR', meter: { hours: 14800, perDay: 6 },
-        positions: [hydraulic('HYD-RET', 'Breaker return line', false, { lifeFactor: 0.6 }), hydraulic('HYD-SUC', 'Power pack pump suction', true)],
+        positions: [hydraulic('HYD-RET', 'Breaker return line', false), hydraulic('HYD-SUC', 'Power pack pump suction', true)],
       },
       {
         assetNumber: 'BFQ-FD-01', name: 'Apron feeder', area: 'PCR',
@@ -166,7 +166,7 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       },
       {
         assetNumber: 'BFQ-CP-01', name: 'Plant air compressor', area: 'PCR', meter: { hours: 42100, perDay: 16 },
-        positions: [air('DISCH', 'Compressor discharge to air receiver', 25, false, { mopKpa: [850, 950], tempC: [-10, 70], lengthM: [2, 3], lifeFactor: 1.6 })],
+        positions: [air('DISCH', 'Compressor discharge to air receiver', 25, false, { mopKpa: [850, 950], tempC: [-10, 70], lengthM: [2, 3] })],
       },
       {
         assetNumber: 'BFQ-CR-02', name: 'Secondary cone crusher', area: 'SCR', meter: { hours: 27400, perDay: 12 },
@@ -195,8 +195,8 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       {
         assetNumber: 'BFQ-CV-01', name: 'Stockpile conveyor belt cleaners', area: 'SCR',
         positions: [
-          air('AIR-1', 'Air knife at the head pulley', 19, false, { mopKpa: [600, 700], lengthM: [6, 10], criticality: 'low', lifeFactor: 1.4 }),
-          air('AIR-2', 'Air knife at the tail pulley', 19, false, { mopKpa: [600, 700], lengthM: [6, 10], criticality: 'low', lifeFactor: 1.4 }),
+          air('AIR-1', 'Air knife at the head pulley', 19, false, { mopKpa: [600, 700], lengthM: [6, 10], criticality: 'low' }),
+          air('AIR-2', 'Air knife at the tail pulley', 19, false, { mopKpa: [600, 700], lengthM: [6, 10], criticality: 'low' }),
         ],
       },
       {
@@ -204,11 +204,11 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
         positions: [slurry('DISCH', 'Pump discharge to cyclone feed main', 152), water('GLAND', 'Gland seal water', false, { criticality: 'medium', lengthM: [2, 3] })],
       },
       {
-        assetNumber: 'BFQ-SP-02', name: 'Wash plant slurry pump 2', area: 'WSH', meter: { hours: 17300, perDay: 14 },
+        assetNumber: 'BFQ-SP-02', name: 'Wash plant slurry pump 2', area: 'WSH', meter: { hours: 19300, perDay: 14 },
         positions: [slurry('DISCH', 'Pump discharge to cyclone feed main', 152), water('GLAND', 'Gland seal water', false, { criticality: 'medium', lengthM: [2, 3] })],
       },
       {
-        assetNumber: 'BFQ-SP-03', name: 'Fines recovery slurry pump', area: 'WSH', meter: { hours: 9600, perDay: 10 },
+        assetNumber: 'BFQ-SP-03', name: 'Fines recovery slurry pump', area: 'WSH', meter: { hours: 14600, perDay: 10 },
         positions: [slurry('DISCH', 'Pump discharge to fines cyclone', 102), water('GLAND', 'Gland seal water', false, { criticality: 'medium', lengthM: [2, 3] })],
       },
       {
@@ -239,11 +239,11 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
         positions: [chemical('HYPO', 'Hypochlorite dosing to the storage tank', 'sodium-hypochlorite-up-to-15', { mopKpa: [200, 400] })],
       },
       {
-        assetNumber: 'BFQ-FP-01', name: 'Filter press', area: 'WSH', meter: { hours: 11200, perDay: 9 },
+        assetNumber: 'BFQ-FP-01', name: 'Filter press', area: 'WSH', meter: { hours: 13900, perDay: 9 },
         positions: [
           slurry('FEED', 'Press feed from the underflow pump', 102, { mopKpa: [1200, 1500] }),
           water('WASH', 'Cloth wash water', false, { mopKpa: [800, 1000], criticality: 'medium' }),
-          air('AIR-BLOW', 'Cake blow air', 25, false, { mopKpa: [700, 800], lengthM: [3, 5], tempC: [0, 35], lifeFactor: 1.2 }),
+          air('AIR-BLOW', 'Cake blow air', 25, false, { mopKpa: [700, 800], lengthM: [3, 5], tempC: [0, 35] }),
         ],
       },
       {
@@ -252,17 +252,17 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       },
       ...(['01', '02', '03'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `BFQ-DR-${n}`, name: `Top-hammer crawler drill rig ${i + 1}`, area: 'DNB', meter: { hours: [8800, 12600, 5400][i]!, perDay: 9 },
+          assetNumber: `BFQ-DR-${n}`, name: `Top-hammer crawler drill rig ${i + 1}`, area: 'DNB', meter: { hours: [13800, 16600, 11900][i]!, perDay: 9 },
           positions: [
             air('AIR-FLUSH', 'Flushing air, compressor to rotation head', 25, false, { mopKpa: [800, 950] }),
             air('AIR-LUB', 'Shank lubrication air', 19, false, { mopKpa: [600, 750], lengthM: [4, 8], criticality: 'medium' }),
-            hydraulic('HYD-RET', 'Feed and boom return line', false, { lifeFactor: 0.8 }),
+            hydraulic('HYD-RET', 'Feed and boom return line', false),
             hydraulic('HYD-SUC', 'Main pump suction', true),
           ],
         }),
       ),
       {
-        assetNumber: 'BFQ-DR-04', name: 'Down-the-hole drill rig', area: 'DNB', meter: { hours: 6900, perDay: 8 },
+        assetNumber: 'BFQ-DR-04', name: 'Down-the-hole drill rig', area: 'DNB', meter: { hours: 10900, perDay: 8 },
         positions: [
           air('AIR-MAIN', 'Main air from the portable compressor', 25, true, { mopKpa: [860, 860], lengthM: [15, 20] }),
           hydraulic('HYD-RET', 'Feed and boom return line', false),
@@ -278,15 +278,15 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       },
       {
         assetNumber: 'BFQ-HD-01', name: 'Hand-held rock drill for pop shooting', area: 'DNB',
-        positions: [air('AIR', 'Drill whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5], lifeFactor: 0.6 })],
+        positions: [air('AIR', 'Drill whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5] })],
       },
       {
         assetNumber: 'BFQ-HD-02', name: 'Hand-held rock drill, spare', area: 'DNB',
-        positions: [air('AIR', 'Drill whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5], lifeFactor: 0.6 })],
+        positions: [air('AIR', 'Drill whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5] })],
       },
       {
         assetNumber: 'BFQ-PB-01', name: 'Pneumatic breaker for oversize', area: 'DNB',
-        positions: [air('AIR', 'Breaker whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5], lifeFactor: 0.6 })],
+        positions: [air('AIR', 'Breaker whip hose', 19, true, { mopKpa: [600, 700], lengthM: [3, 5] })],
       },
       {
         assetNumber: 'BFQ-FB-01', name: 'Diesel dispensing island', area: 'FUE',
@@ -335,13 +335,13 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
         positions: [dewatering('DISCH', 'Discharge riser to the pit rim', 102, false, { lengthM: [15, 20] })],
       },
       {
-        assetNumber: 'BFQ-DW-04', name: 'Settling pond return pump', area: 'SMP', meter: { hours: 12300, perDay: 10 },
+        assetNumber: 'BFQ-DW-04', name: 'Settling pond return pump', area: 'SMP', meter: { hours: 14300, perDay: 10 },
         positions: [dewatering('SUCTION', 'Suction from the clear-water pond', 102, true), dewatering('DISCH', 'Discharge to the wash plant tank', 102, false)],
       },
       {
         assetNumber: 'BFQ-WK-01', name: 'Workshop air reels', area: 'WKS',
         positions: (['1', '2', '3', '4'] as const).map((n) =>
-          air(`REEL-${n}`, `Air reel ${n}`, 19, false, { medium: 'compressed-air-oil-free', mopKpa: [700, 750], tempC: [5, 30], lengthM: [15, 15], criticality: 'low', lifeFactor: 1.8 }),
+          air(`REEL-${n}`, `Air reel ${n}`, 19, false, { medium: 'compressed-air-oil-free', mopKpa: [700, 750], tempC: [5, 30], lengthM: [15, 15], criticality: 'low' }),
         ),
       },
       {
@@ -352,7 +352,7 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
             construction: 'BLS-32-SD', ends: ['BLC-TH', 'BLC-TH'], connections: ['1-1/4 in blast coupling', '1-1/4 in blast coupling'], mopKpa: [700, 860],
             tempC: [5, 35], lengthM: [15, 20], suction: false, criticality: 'high',
           })),
-          air('AIR-SUPPLY', 'Dry air supply to the blast pots', 25, false, { medium: 'compressed-air-oil-free', mopKpa: [800, 900], tempC: [5, 35], lengthM: [5, 8], lifeFactor: 1.5 }),
+          air('AIR-SUPPLY', 'Dry air supply to the blast pots', 25, false, { medium: 'compressed-air-oil-free', mopKpa: [800, 900], tempC: [5, 35], lengthM: [5, 8] }),
         ],
       },
       {
@@ -395,13 +395,13 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       ...(['01', '02'] as const).map(
         (n, i): EquipmentTemplate => ({
           assetNumber: `CWM-CP-${n}`, name: `Surface compressor ${i + 1}`, area: 'CMP', meter: { hours: [38500, 29700][i]!, perDay: 18 },
-          positions: [air('DISCH', 'Compressor discharge to the air receiver', 25, false, { mopKpa: [850, 950], tempC: [-10, 70], lengthM: [2, 3], lifeFactor: 1.6 })],
+          positions: [air('DISCH', 'Compressor discharge to the air receiver', 25, false, { mopKpa: [850, 950], tempC: [-10, 70], lengthM: [2, 3] })],
         }),
       ),
       {
         assetNumber: 'CWM-WK-01', name: 'Portal workshop air reels', area: 'PRT',
         positions: (['1', '2', '3'] as const).map((n) =>
-          air(`REEL-${n}`, `Air reel ${n}`, 19, false, { medium: 'compressed-air-oil-free', mopKpa: [700, 750], tempC: [0, 30], lengthM: [15, 15], criticality: 'low', lifeFactor: 1.8 }),
+          air(`REEL-${n}`, `Air reel ${n}`, 19, false, { medium: 'compressed-air-oil-free', mopKpa: [700, 750], tempC: [0, 30], lengthM: [15, 15], criticality: 'low' }),
         ),
       },
       {
@@ -418,7 +418,7 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       },
       ...(['01', '02', '03'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `CWM-DR-${n}`, name: `Pneumatic drifter rig ${i + 1}, development`, area: 'DEV', meter: { hours: [6200, 4900, 7300][i]!, perDay: 7 },
+          assetNumber: `CWM-DR-${n}`, name: `Pneumatic drifter rig ${i + 1}, development`, area: 'DEV', meter: { hours: [9800, 8700, 10900][i]!, perDay: 7 },
           positions: [
             air('AIR', 'Drill air from the level manifold', 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30] }),
             water('WTR', 'Flushing water from the level main', true, { mopKpa: [500, 800], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium' }),
@@ -427,17 +427,17 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       ),
       {
         assetNumber: 'CWM-RB-01', name: 'Pneumatic rock breaker, development heading', area: 'DEV',
-        positions: [air('AIR', 'Breaker supply hose', 19, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [8, 12], lifeFactor: 0.6 })],
+        positions: [air('AIR', 'Breaker supply hose', 19, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [8, 12] })],
       },
       {
         assetNumber: 'CWM-AM-01', name: 'Level 1 air manifold', area: 'DEV',
         positions: (['1', '2', '3'] as const).map((n) =>
-          air(`BR-${n}`, `Branch ${n} to the face`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium', lifeFactor: 1.2 }),
+          air(`BR-${n}`, `Branch ${n} to the face`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium' }),
         ),
       },
       ...(['04', '05', '06'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `CWM-DR-${n}`, name: `Longhole stope drill ${i + 1}`, area: 'STP', meter: { hours: [9100, 3800, 11400][i]!, perDay: 8 },
+          assetNumber: `CWM-DR-${n}`, name: `Longhole stope drill ${i + 1}`, area: 'STP', meter: { hours: [11900, 3800, 11400][i]!, perDay: 8 },
           positions: [
             air('AIR', 'Drill air from the level manifold', 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30] }),
             water('WTR', 'Flushing water from the level main', true, { mopKpa: [500, 800], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium' }),
@@ -446,10 +446,10 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       ),
       {
         assetNumber: 'CWM-RB-02', name: 'Pneumatic rock breaker, level 2 drawpoint', area: 'STP',
-        positions: [air('AIR', 'Breaker supply hose', 19, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [8, 12], lifeFactor: 0.6 })],
+        positions: [air('AIR', 'Breaker supply hose', 19, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [8, 12] })],
       },
       {
-        assetNumber: 'CWM-RB-03', name: 'Pneumatic rock breaker, level 3 grizzly', area: 'STP',
+        assetNumber: 'CWM-RB-03', name: 'Pneumatic rock breaker, level 3 grizzly', area: 'STP', commissionedDaysAgo: 28,
         positions: [
           air('AIR', 'Breaker supply hose under the grizzly guard', 19, true, {
             mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [6, 8], bendMm: 110, inspectionIntervalDays: 7,
@@ -460,27 +460,27 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       {
         assetNumber: 'CWM-AM-02', name: 'Level 2 air manifold', area: 'STP',
         positions: (['1', '2', '3'] as const).map((n) =>
-          air(`BR-${n}`, `Branch ${n} to the stope`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium', lifeFactor: 1.2 }),
+          air(`BR-${n}`, `Branch ${n} to the stope`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium' }),
         ),
       },
       {
         assetNumber: 'CWM-AM-03', name: 'Level 3 air manifold', area: 'STP',
         positions: (['1', '2'] as const).map((n) =>
-          air(`BR-${n}`, `Branch ${n} to the stope`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium', lifeFactor: 1.2 }),
+          air(`BR-${n}`, `Branch ${n} to the stope`, 25, true, { mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [20, 30], criticality: 'medium' }),
         ),
       },
       ...(['01', '02'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `CWM-LH-${n}`, name: `Underground loader ${i + 1}`, area: 'STP', meter: { hours: [13800, 10200][i]!, perDay: 14 },
+          assetNumber: `CWM-LH-${n}`, name: `Underground loader ${i + 1}`, area: 'STP', meter: { hours: [20600, 17900][i]!, perDay: 14 },
           positions: [
-            hydraulic('HYD-RET', 'Bucket circuit return line', false, { tempC: [5, 80], lifeFactor: 0.7 }),
+            hydraulic('HYD-RET', 'Bucket circuit return line', false, { tempC: [5, 80] }),
             hydraulic('HYD-SUC', 'Main pump suction', true, { tempC: [5, 80] }),
           ],
         }),
       ),
       ...(['01', '02', '03'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `CWM-DW-${n}`, name: `Dewatering pump ${i + 1}, ${['level 3 sump', 'level 2 sump', 'main pump station'][i]}`, area: 'DWT', meter: { hours: [25100, 18800, 33600][i]!, perDay: 16 },
+          assetNumber: `CWM-DW-${n}`, name: `Dewatering pump ${i + 1}, ${['level 3 sump', 'level 2 sump', 'main pump station'][i]}`, area: 'DWT', meter: { hours: [25100, 21800, 33600][i]!, perDay: 16 },
           positions: [
             dewatering('SUCTION', 'Suction from the sump', 102, true, { tempC: UNDERGROUND }),
             dewatering('DISCH', 'Discharge to the rising main', 102, false, { tempC: UNDERGROUND, mopKpa: [500, 700], ...(i === 1 ? { bendMm: 900 } : {}) }),
@@ -489,12 +489,12 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
       ),
       ...(['01', '02'] as const).map(
         (n, i): EquipmentTemplate => ({
-          assetNumber: `CWM-MP-${n}`, name: `Mud pump ${i + 1}, level 3 settling sump`, area: 'DWT', meter: { hours: [8700, 6100][i]!, perDay: 6 },
+          assetNumber: `CWM-MP-${n}`, name: `Mud pump ${i + 1}, level 3 settling sump`, area: 'DWT', meter: { hours: [8700, 8300][i]!, perDay: 6 },
           positions: [slurry('DISCH', 'Pump discharge to the surface settling pond', 102, { tempC: UNDERGROUND, mopKpa: [1000, 1300], lengthM: [10, 15] })],
         }),
       ),
       {
-        assetNumber: 'CWM-SC-01', name: 'Shotcrete sprayer 1', area: 'SHC', meter: { hours: 5800, perDay: 5 },
+        assetNumber: 'CWM-SC-01', name: 'Shotcrete sprayer 1', area: 'SHC', meter: { hours: 6900, perDay: 5 },
         positions: [
           air('NOZ-AIR', 'Nozzle air', 25, true, { medium: 'compressed-air-oil-free', mopKpa: [600, 700], tempC: UNDERGROUND, lengthM: [10, 15], criticality: 'medium' }),
           chemical('ACCEL', 'Accelerator dosing to the nozzle', null, {
@@ -525,7 +525,7 @@ export const SITE_TEMPLATES: readonly SiteTemplate[] = [
         ],
       },
       {
-        assetNumber: 'CWM-ST-01', name: 'Steam generator', area: 'STM', meter: { hours: 4100, perDay: 4 },
+        assetNumber: 'CWM-ST-01', name: 'Steam generator', area: 'STM', meter: { hours: 5800, perDay: 4 },
         positions: [
           {
             key: 'OUTLET', name: 'Generator outlet to the lance manifold', service: 'steam', medium: 'saturated-steam', construction: 'STM-19-EP', ends: ['CRP-STM', 'CRP-STM'],
