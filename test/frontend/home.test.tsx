@@ -9,6 +9,13 @@ registerDomCleanup();
 function homeApi() {
   return new MockApi()
     .on('GET /api/sites', json({ data: SITES }))
+    .on('GET /api/assemblies', ({ url }) => {
+      // Totals by filter: 140 in service, 5 failing, 30 warning, 17 overdue, 18 due soon, 6 tagged out.
+      const p = url.searchParams;
+      const total =
+        p.get('checkOutcome') === 'fail' ? 5 : p.get('checkOutcome') === 'warn' ? 30 : p.get('due') === 'overdue' ? 17 : p.get('due') ? 18 : p.get('status') === 'tagged_out' ? 6 : 140;
+      return json({ data: [], pagination: { page: 1, pageSize: 1, total } });
+    })
     .on('GET /api/users', ({ url }) => {
       const totals: Record<string, number> = { active: 12, invited: 3, expired: 2, inactive: 1 };
       const total = totals[url.searchParams.get('status') ?? ''] ?? 16;
@@ -53,6 +60,24 @@ describe('home page', () => {
     expect(within(card).getByText('Access expired')).toBeTruthy();
     expect(within(card).getByText('18 users')).toBeTruthy();
     expect(within(card).getByRole('link', { name: 'Manage users' }).getAttribute('href')).toBe('/users');
+  });
+
+  it('gives a technician the way to find a hose and the hoses that need them, each count opening the register filtered', async () => {
+    renderApp('/', { me: buildMe({ role: 'technician', abilities: ['session.read', 'register.read'] }), api: homeApi() });
+    const card = await screen.findByRole('region', { name: 'Hoses that need you' });
+    const overdue = await within(card).findByRole('link', { name: /Inspection overdue/ });
+    expect(overdue.textContent).toContain('17');
+    expect(overdue.getAttribute('href')).toBe('/register?status=installed%2Ctagged_out&due=overdue&sort=nextInspectionDue');
+    expect(within(card).getByRole('link', { name: /Tagged out/ }).textContent).toContain('6');
+    const find = screen.getByRole('region', { name: 'At a hose' });
+    expect(within(find).getByRole('link', { name: 'Find a hose' }).getAttribute('href')).toBe('/find');
+  });
+
+  it('gives a reliability engineer the register at a glance', async () => {
+    renderApp('/', { me: buildMe({ role: 'reliability_engineer', abilities: ['session.read', 'register.read'] }), api: homeApi() });
+    const card = await screen.findByRole('region', { name: 'The register at a glance' });
+    expect((await within(card).findByRole('link', { name: /In service/ })).textContent).toContain('140');
+    expect(within(card).getByRole('link', { name: /Failing a check/ }).textContent).toContain('5');
   });
 
   it('shows no users summary to someone without the ability to list users', async () => {

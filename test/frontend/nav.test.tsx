@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { render, screen, within } from '@testing-library/react';
+import { fireEvent, render, screen, within } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
 import { AppShell } from '@/components/layouts/app-shell';
 import { ToastProvider } from '@/components/ui/toast';
@@ -25,13 +25,18 @@ function renderShell(abilities: string[], meta = buildMeta()) {
 const mainNavs = () => screen.getAllByRole('navigation', { name: 'Main' });
 
 describe('main navigation', () => {
-  it('shows Users to a user whose abilities include listing users', () => {
-    renderShell(['session.read', 'preferences.update', 'users.list']);
+  it('shows Users to a user whose abilities include listing users: in the side bar, and under More on a phone', () => {
+    renderShell(['session.read', 'preferences.update', 'users.list', 'register.read']);
+    const [side, phone] = mainNavs();
     expect(mainNavs()).toHaveLength(2);
+    expect(within(side!).getByRole('link', { name: /Users/ }).getAttribute('href')).toBe('/users');
     for (const nav of mainNavs()) {
       expect(within(nav).getByRole('link', { name: /Home/ }).getAttribute('href')).toBe('/');
-      expect(within(nav).getByRole('link', { name: /Users/ }).getAttribute('href')).toBe('/users');
+      expect(within(nav).getByRole('link', { name: /Register/ }).getAttribute('href')).toBe('/register');
     }
+    expect(within(phone!).queryByRole('link', { name: /Users/ })).toBeNull();
+    fireEvent.click(within(phone!).getByRole('button', { name: 'More' }));
+    expect(within(screen.getByRole('dialog', { name: 'More' })).getByRole('link', { name: /Users/ }).getAttribute('href')).toBe('/users');
   });
 
   it('follows the abilities, not the role: no Users without users.list', () => {
@@ -47,7 +52,7 @@ describe('main navigation', () => {
     expect(screen.getByText('Casey Superintendent')).toBeTruthy();
     expect(screen.getByText('Administrator')).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Sign out' })).toBeTruthy();
-    expect(screen.getByRole('button', { name: 'Account' })).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'More' })).toBeTruthy();
   });
 
   it('marks a demo in the shell with the link to sent e-mails', () => {

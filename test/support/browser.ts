@@ -149,3 +149,16 @@ export async function demoColleagues(browser: TestBrowser, role: Role): Promise<
   const signIns = new Set(DEMO_SIGN_INS.map((s) => s.email));
   return data.filter((u) => !signIns.has(u.email) && u.accessExpiresOn === null);
 }
+
+/** A code no other run has used, in capitals and digits: `E2E-AIR` → `E2E-AIR-K3F9Q2`. */
+export function uniqueCode(prefix: string): string {
+  const tail = `${Date.now().toString(36).slice(-4)}${Math.random().toString(36).slice(2, 4)}`.toUpperCase();
+  return `${prefix}-${tail}`;
+}
+
+/** A GET to the API with the page's own session; the body as JSON, or an error naming the status. */
+export async function getJson<T>(page: Page, path: string, params?: Record<string, string | number | boolean>): Promise<T> {
+  const response = await page.request.get(path, params ? { params } : undefined);
+  if (!response.ok()) throw new Error(`GET ${path} answered ${response.status()}: ${await response.text()}`);
+  return (await response.json()) as T;
+}

@@ -48,7 +48,7 @@ export async function presentAssembly(ctx: AppContext, actor: Actor, id: string)
   const rows = await ctx.ds.query(
     `SELECT a.id, a.number, a.status, a.site_id AS "siteId", s.name AS "siteName",
             c.id AS "constructionId", c.code AS "constructionCode", c.name AS "constructionName", c.size_code AS "sizeCode",
-            p.id AS "positionId", p.code AS "positionCode", p.name AS "positionName", e.name AS "equipmentName", ar.name AS "areaName", p.service_code AS "serviceCode",
+            p.id AS "positionId", p.code AS "positionCode", p.name AS "positionName", e.name AS "equipmentName", e.asset_number AS "equipmentAssetNumber", ar.name AS "areaName", p.service_code AS "serviceCode",
             a.check_outcome AS "checkOutcome",
             EXISTS (SELECT 1 FROM check_overrides o WHERE o.assembly_id = a.id AND o.position_id = a.position_id) AS overridden,
             a.next_inspection_due::text AS "nextInspectionDue", a.installed_at AS "installedAt", a.updated_at AS "updatedAt"

@@ -4,7 +4,8 @@ import type { AppContext } from '../context.js';
 import { NotFoundError } from '../errors.js';
 import type { Actor } from '../policies/actor.js';
 
-const SORTS: Record<AssemblyListQuery['sort'], string> = {
+/** The register's sort columns in SQL; the list and the export order alike. */
+export const REGISTER_SORTS: Record<AssemblyListQuery['sort'], string> = {
   number: 'a.number',
   construction: 'c.code',
   position: 'p.code',
@@ -17,7 +18,7 @@ const SORTS: Record<AssemblyListQuery['sort'], string> = {
 
 const LIST_COLUMNS = `a.id, a.number, a.status, a.site_id AS "siteId", s.name AS "siteName",
   c.id AS "constructionId", c.code AS "constructionCode", c.name AS "constructionName", c.size_code AS "sizeCode",
-  p.id AS "positionId", p.code AS "positionCode", p.name AS "positionName", e.name AS "equipmentName", ar.name AS "areaName", p.service_code AS "serviceCode",
+  p.id AS "positionId", p.code AS "positionCode", p.name AS "positionName", e.name AS "equipmentName", e.asset_number AS "equipmentAssetNumber", ar.name AS "areaName", p.service_code AS "serviceCode",
   a.check_outcome AS "checkOutcome",
   EXISTS (SELECT 1 FROM check_overrides o WHERE o.assembly_id = a.id AND o.position_id = a.position_id) AS overridden,
   a.next_inspection_due::text AS "nextInspectionDue", a.installed_at AS "installedAt", a.updated_at AS "updatedAt"`;
@@ -43,6 +44,7 @@ interface ListRow {
   positionCode: string | null;
   positionName: string | null;
   equipmentName: string | null;
+  equipmentAssetNumber: string | null;
   areaName: string | null;
   serviceCode: string | null;
   checkOutcome: AssemblyListItemDto['checkOutcome'];
@@ -61,7 +63,7 @@ export function presentListRow(r: ListRow): AssemblyListItemDto {
     siteName: r.siteName,
     construction: { id: r.constructionId, code: r.constructionCode, name: r.constructionName, sizeCode: r.sizeCode },
     position: r.positionId
-      ? { id: r.positionId, code: r.positionCode!, name: r.positionName!, equipmentName: r.equipmentName!, areaName: r.areaName!, serviceCode: r.serviceCode! }
+      ? { id: r.positionId, code: r.positionCode!, name: r.positionName!, equipmentName: r.equipmentName!, equipmentAssetNumber: r.equipmentAssetNumber!, areaName: r.areaName!, serviceCode: r.serviceCode! }
       : null,
     checkOutcome: r.checkOutcome,
     overridden: r.overridden,
@@ -111,7 +113,7 @@ export async function listAssemblies(ctx: AppContext, actor: Actor, query: Assem
   const today = ctx.clock.now().toISOString().slice(0, 10);
   const { sql, params } = registerWhere(actor, query, today);
   const dir = query.dir === 'desc' ? 'DESC' : 'ASC';
-  const order = `${SORTS[query.sort]} ${dir} NULLS LAST, a.number ${dir}`;
+  const order = `${REGISTER_SORTS[query.sort]} ${dir} NULLS LAST, a.number ${dir}`;
   const [count] = await ctx.ds.query(`SELECT count(*)::int AS n ${LIST_FROM} ${sql}`, params);
   const rows: ListRow[] = await ctx.ds.query(
     `SELECT ${LIST_COLUMNS} ${LIST_FROM} ${sql} ORDER BY ${order} LIMIT ${query.pageSize} OFFSET ${(query.page - 1) * query.pageSize}`,

@@ -52,6 +52,39 @@ export const paths = {
       getHref: (id: string) => `/users/${encodeURIComponent(id)}`,
     },
   },
+  register: {
+    path: '/register',
+    /** The register view; its filters, sort, page and columns live in the query string. */
+    getHref: (search?: URLSearchParams | string) => {
+      const query = search ? search.toString() : '';
+      return query ? `/register?${query}` : '/register';
+    },
+  },
+  find: {
+    path: '/find',
+    getHref: () => '/find',
+  },
+  assemblies: {
+    detail: { path: '/assemblies/:id', getHref: (id: string) => `/assemblies/${encodeURIComponent(id)}` },
+    create: { path: '/assemblies/new', getHref: (query: { siteId?: string; constructionId?: string; next?: string } = {}) => withQuery('/assemblies/new', query) },
+    replace: { path: '/assemblies/:id/replace', getHref: (id: string) => `/assemblies/${encodeURIComponent(id)}/replace` },
+  },
+  positions: {
+    detail: { path: '/positions/:id', getHref: (id: string) => `/positions/${encodeURIComponent(id)}` },
+    create: { path: '/positions/new', getHref: (query: { equipmentId?: string } = {}) => withQuery('/positions/new', query) },
+  },
+  catalogue: {
+    constructions: { path: '/catalogue/constructions', getHref: () => '/catalogue/constructions' },
+    construction: { path: '/catalogue/constructions/:id', getHref: (id: string) => `/catalogue/constructions/${encodeURIComponent(id)}` },
+    fittings: { path: '/catalogue/fittings', getHref: () => '/catalogue/fittings' },
+    fitting: { path: '/catalogue/fittings/:id', getHref: (id: string) => `/catalogue/fittings/${encodeURIComponent(id)}` },
+    services: { path: '/catalogue/services', getHref: (siteId?: string) => withQuery('/catalogue/services', { siteId }) },
+    places: { path: '/sites', getHref: (siteId?: string) => withQuery('/sites', { siteId }) },
+  },
+  importCsv: {
+    path: '/import',
+    getHref: (jobId?: string) => withQuery('/import', { job: jobId }),
+  },
   /** Server-rendered page of the e-mails a demo has sent; reached with a plain link, not the router. */
   demoMail: {
     href: '/demo/mail',

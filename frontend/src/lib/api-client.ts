@@ -7,14 +7,17 @@ export class ApiError extends Error {
   readonly field: string | undefined;
   /** From the `Retry-After` header, in seconds. */
   readonly retryAfterSeconds: number | undefined;
+  /** The server's `error.details`, e.g. every check result behind a refused install. */
+  readonly details: unknown;
 
-  constructor(init: { status: number; code: string; message: string; field?: string; retryAfterSeconds?: number }) {
+  constructor(init: { status: number; code: string; message: string; field?: string; retryAfterSeconds?: number; details?: unknown }) {
     super(init.message);
     this.name = 'ApiError';
     this.status = init.status;
     this.code = init.code;
     this.field = init.field;
     this.retryAfterSeconds = init.retryAfterSeconds;
+    this.details = init.details;
   }
 }
 
@@ -102,13 +105,14 @@ async function request<T>(method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', p
   }
 
   if (!response.ok) {
-    const error = (json as Partial<ApiErrorBody> | null)?.error;
+    const error = (json as { error?: ApiErrorBody['error'] & { details?: unknown } } | null)?.error;
     throw new ApiError({
       status: response.status,
       code: error?.code ?? `http_${response.status}`,
       message: error?.message ?? defaultMessage(response.status),
       field: error?.field,
       retryAfterSeconds: parseRetryAfter(response.headers.get('Retry-After')),
+      details: error?.details,
     });
   }
 

@@ -192,7 +192,7 @@ export interface AssemblyListItemDto {
   siteId: string;
   siteName: string;
   construction: { id: string; code: string; name: string; sizeCode: string };
-  position: { id: string; code: string; name: string; equipmentName: string; areaName: string; serviceCode: string } | null;
+  position: { id: string; code: string; name: string; equipmentName: string; equipmentAssetNumber: string; areaName: string; serviceCode: string } | null;
   checkOutcome: CheckOutcome | null;
   overridden: boolean;
   nextInspectionDue: string | null;

@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { NavLink } from 'react-router-dom';
+import { NavLink, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/roles';
 import type { AppMetaDto, MeDto } from '@shared/schemas/auth.schema';
 import { cn } from '@/lib/cn';
@@ -25,6 +25,7 @@ interface AppShellProps {
  */
 export function AppShell({ user, meta, onSignOut, signingOut, children }: AppShellProps) {
   const items = navItemsFor(user);
+  const inSection = useInSection();
   const demo = meta.mode === 'demo';
 
   return (
@@ -51,7 +52,7 @@ export function AppShell({ user, meta, onSignOut, signingOut, children }: AppShe
                   className={({ isActive }) =>
                     cn(
                       'flex min-h-12 items-center gap-3 rounded-[var(--radius-control)] border-l-4 px-3 font-semibold',
-                      isActive ? 'border-copper-400 bg-ink-800 text-white' : 'border-transparent text-ink-200 hover:bg-ink-900 hover:text-white',
+                      isActive || inSection(item.section) ? 'border-copper-400 bg-ink-800 text-white' : 'border-transparent text-ink-200 hover:bg-ink-900 hover:text-white',
                     )
                   }
                 >
@@ -75,7 +76,6 @@ export function AppShell({ user, meta, onSignOut, signingOut, children }: AppShe
 
       <header className="on-dark sticky top-0 z-20 flex items-center justify-between gap-3 bg-ink-950 px-4 py-3 md:hidden">
         <Brand companyName={meta.companyName} />
-        {demo ? <Badge tone="inverse">Demo</Badge> : null}
       </header>
 
       <div className="md:pl-64">
@@ -90,8 +90,12 @@ export function AppShell({ user, meta, onSignOut, signingOut, children }: AppShe
   );
 }
 
-function PhoneBar({ user, items, onSignOut, signingOut }: { user: MeDto; items: ReturnType<typeof navItemsFor>; onSignOut: () => void; signingOut?: boolean }) {
+function PhoneBar({ user, items: allItems, onSignOut, signingOut }: { user: MeDto; items: ReturnType<typeof navItemsFor>; onSignOut: () => void; signingOut?: boolean }) {
   const [accountOpen, setAccountOpen] = useState(false);
+  // The bar holds the few places a fitter goes in the field; the rest are one tap away under "More".
+  const items = allItems.filter((item) => item.phone);
+  const inSection = useInSection();
+  const more = allItems.filter((item) => !item.phone);
   const itemClasses = 'flex min-h-16 min-w-11 flex-1 flex-col items-center justify-center gap-0.5 px-1 text-xs font-semibold';
 
   return (
@@ -103,7 +107,7 @@ function PhoneBar({ user, items, onSignOut, signingOut }: { user: MeDto; items: 
               to={item.to}
               end={item.end}
               className={({ isActive }) =>
-                cn(itemClasses, 'border-t-4', isActive ? 'border-copper-400 text-white' : 'border-transparent text-ink-200 hover:text-white')
+                cn(itemClasses, 'border-t-4', isActive || inSection(item.section) ? 'border-copper-400 text-white' : 'border-transparent text-ink-200 hover:text-white')
               }
             >
               <item.icon className="size-6" />
@@ -119,12 +123,29 @@ function PhoneBar({ user, items, onSignOut, signingOut }: { user: MeDto; items: 
             className={cn(itemClasses, 'border-t-4 border-transparent text-ink-200 hover:text-white')}
           >
             <AccountIcon className="size-6" />
-            Account
+            More
           </button>
         </li>
       </ul>
-      <Dialog open={accountOpen} onClose={() => setAccountOpen(false)} title="Account" size="sm">
+      <Dialog open={accountOpen} onClose={() => setAccountOpen(false)} title="More" size="sm">
         <div className="flex flex-col gap-4">
+          {more.length ? (
+            <ul className="flex flex-col gap-1" aria-label="More places">
+              {more.map((item) => (
+                <li key={item.to}>
+                  <NavLink
+                    to={item.to}
+                    end={item.end}
+                    onClick={() => setAccountOpen(false)}
+                    className="flex min-h-12 items-center gap-3 rounded-[var(--radius-control)] px-3 font-semibold text-ink-900 hover:bg-ink-100"
+                  >
+                    <item.icon className="shrink-0" />
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+          ) : null}
           <dl className="flex flex-col gap-2">
             <div>
               <dt className="text-sm text-ink-600">Signed in as</dt>
@@ -143,4 +164,10 @@ function PhoneBar({ user, items, onSignOut, signingOut }: { user: MeDto; items: 
       </Dialog>
     </nav>
   );
+}
+
+/** Whether the current page lies under a navigation item's section (e.g. every page of the catalogue). */
+function useInSection() {
+  const { pathname } = useLocation();
+  return (section: string | undefined) => !!section && (pathname === section || pathname.startsWith(`${section}/`));
 }

@@ -136,3 +136,31 @@ export const FerruleMark = (props: IconProps) => (
     <path d="M12 10v12M16 10v12M20 10v12" stroke="currentColor" strokeWidth="2" />
   </svg>
 );
+
+export const ListIcon = (props: IconProps) => (
+  <Icon {...props}>
+    <path d="M8 6h13M8 12h13M8 18h13" />
+    <path d="M3.5 6h.01M3.5 12h.01M3.5 18h.01" />
+  </Icon>
+);
+
+export const BookIcon = (props: IconProps) => (
+  <Icon {...props}>
+    <path d="M4 4.5A2.5 2.5 0 0 1 6.5 2H20v17H6.5A2.5 2.5 0 0 0 4 21.5z" />
+    <path d="M4 21.5A2.5 2.5 0 0 1 6.5 19H20v3H6.5" />
+  </Icon>
+);
+
+export const MapIcon = (props: IconProps) => (
+  <Icon {...props}>
+    <path d="M12 21s-7-6.2-7-11.5A7 7 0 0 1 19 9.5C19 14.8 12 21 12 21z" />
+    <circle cx="12" cy="9.5" r="2.5" />
+  </Icon>
+);
+
+export const UploadIcon = (props: IconProps) => (
+  <Icon {...props}>
+    <path d="M12 16V4M7 9l5-5 5 5" />
+    <path d="M4 16v4h16v-4" />
+  </Icon>
+);

@@ -3,6 +3,8 @@ import { ROLE_LABELS, type Role } from '@shared/roles';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { hasAbility, useCurrentUser } from '@/lib/auth';
 import { PanelBoundary } from '@/components/ui/error-boundary';
+import { FindHoseCard } from '@/features/overview/components/find-hose-card';
+import { RegisterHealthCard } from '@/features/overview/components/register-health-card';
 import { UnitsCard } from '@/features/preferences/components/units-card';
 import { MySitesCard } from '@/features/sites/components/my-sites-card';
 import { UsersSummaryCard } from '@/features/users/components/users-summary-card';
@@ -26,15 +28,28 @@ const CARDS = {
   },
   sites: { id: 'sites', title: 'Your sites could not be shown', render: (user) => <MySitesCard user={user} /> },
   units: { id: 'units', title: 'Your units could not be shown', render: (user) => <UnitsCard preferences={user.preferences} /> },
+  find: { id: 'find', title: 'The way to find a hose could not be shown', render: () => <FindHoseCard />, visible: (user) => hasAbility(user, 'register.read') },
+  fieldWork: {
+    id: 'field-work',
+    title: 'The hoses that need you could not be shown',
+    render: () => <RegisterHealthCard variant="field" />,
+    visible: (user) => hasAbility(user, 'register.read'),
+  },
+  register: {
+    id: 'register',
+    title: 'The register summary could not be shown',
+    render: () => <RegisterHealthCard variant="engineer" />,
+    visible: (user) => hasAbility(user, 'register.read'),
+  },
 } satisfies Record<string, HomeCard>;
 
 /** Each role's home is its own list of cards, in the order that role needs them. */
 const HOME_CARDS: Record<Role, HomeCard[]> = {
-  technician: [CARDS.sites, CARDS.units],
-  reliability_engineer: [CARDS.sites, CARDS.units],
-  safety_officer: [CARDS.sites, CARDS.units],
-  administrator: [CARDS.users, CARDS.sites, CARDS.units],
-  viewer: [CARDS.sites, CARDS.units],
+  technician: [CARDS.find, CARDS.fieldWork, CARDS.sites, CARDS.units],
+  reliability_engineer: [CARDS.register, CARDS.fieldWork, CARDS.sites, CARDS.units],
+  safety_officer: [CARDS.fieldWork, CARDS.register, CARDS.sites, CARDS.units],
+  administrator: [CARDS.users, CARDS.register, CARDS.sites, CARDS.units],
+  viewer: [CARDS.register, CARDS.sites, CARDS.units],
 };
 
 export function homeTitle(role: Role): string {

@@ -1,0 +1,3 @@
+export const referenceKeys = {
+  all: ['reference'] as const,
+};

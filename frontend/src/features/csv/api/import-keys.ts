@@ -1,0 +1,6 @@
+export const importKeys = {
+  all: ['imports'] as const,
+  lists: () => [...importKeys.all, 'list'] as const,
+  details: () => [...importKeys.all, 'detail'] as const,
+  detail: (id: string) => [...importKeys.details(), id] as const,
+};

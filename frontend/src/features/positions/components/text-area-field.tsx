@@ -1,0 +1,30 @@
+import type { ReactNode, Ref, TextareaHTMLAttributes } from 'react';
+import { cn } from '@/lib/cn';
+import { controlClasses, FieldShell } from '@/components/ui/field';
+
+interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'children'> {
+  label: ReactNode;
+  hint?: ReactNode;
+  error?: string;
+  ref?: Ref<HTMLTextAreaElement>;
+  containerClassName?: string;
+}
+
+/** A few lines of free text with its label, hint and error. */
+export function TextAreaField({ label, hint, error, id, className, containerClassName, ref, rows = 3, ...props }: TextAreaFieldProps) {
+  return (
+    <FieldShell label={label} hint={hint} error={error} id={id} className={containerClassName}>
+      {(ids) => (
+        <textarea
+          ref={ref}
+          id={ids.id}
+          rows={rows}
+          aria-invalid={ids.invalid || undefined}
+          aria-describedby={ids.describedBy}
+          className={cn(controlClasses, 'py-2', className)}
+          {...props}
+        />
+      )}
+    </FieldShell>
+  );
+}
