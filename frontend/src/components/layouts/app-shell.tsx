@@ -3,7 +3,6 @@ import { NavLink, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/roles';
 import type { AppMetaDto, MeDto } from '@shared/schemas/auth.schema';
 import { cn } from '@/lib/cn';
-import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { AccountIcon, SignOutIcon } from '@/components/ui/icons';
@@ -40,7 +39,6 @@ export function AppShell({ user, meta, onSignOut, signingOut, children }: AppShe
       <aside className="on-dark fixed inset-y-0 left-0 z-30 hidden w-64 flex-col bg-ink-950 text-white md:flex">
         <div className="flex flex-col gap-3 px-5 pt-5 pb-4">
           <Brand companyName={meta.companyName} />
-          {demo ? <Badge tone="inverse" className="self-start">Demo</Badge> : null}
         </div>
         <nav aria-label="Main" className="flex-1 px-3 py-2">
           <ul className="flex flex-col gap-1">

@@ -53,7 +53,21 @@ function buildColumns({ lengthUnit, serviceName, today }: ColumnContext) {
     column.accessor('number', { id: 'number', header: COLUMN_LABELS.number, cell: (info) => <AssemblyNumberLink assembly={info.row.original} /> }),
     column.accessor('status', { id: 'status', header: COLUMN_LABELS.status, cell: (info) => <AssemblyStatusBadge status={info.getValue()} /> }),
     column.accessor('position', { id: 'position', header: COLUMN_LABELS.position, cell: (info) => <PositionCell position={info.getValue()} /> }),
-    column.accessor((row) => (row.position ? `${row.position.equipmentAssetNumber} · ${row.position.equipmentName}` : null), { id: 'equipment', header: COLUMN_LABELS.equipment, enableSorting: false, cell: (info) => info.getValue() ?? dash }),
+    column.accessor((row) => row.position, {
+      id: 'equipment',
+      header: COLUMN_LABELS.equipment,
+      enableSorting: false,
+      cell: (info) => {
+        const position = info.getValue();
+        if (!position) return dash;
+        return (
+          <span className="flex flex-col">
+            <span className="font-mono text-sm font-semibold whitespace-nowrap text-ink-900">{position.equipmentAssetNumber}</span>
+            <span className="text-sm text-ink-700">{position.equipmentName}</span>
+          </span>
+        );
+      },
+    }),
     column.accessor((row) => row.position?.areaName ?? null, { id: 'area', header: COLUMN_LABELS.area, enableSorting: false, cell: (info) => info.getValue() ?? dash }),
     column.accessor('siteName', { id: 'site', header: COLUMN_LABELS.site, enableSorting: false }),
     column.accessor('construction', {
