@@ -7,7 +7,7 @@ import { formatTagCode } from '../../shared/src/tags/tag-code.js';
 import { formatLength, formatPressure } from '../../shared/src/units/units.js';
 import { DEMO_SIGN_INS } from '../../backend/src/seed/demo-scenario.js';
 import { FITTING_TYPES } from '../../backend/src/seed/register-catalogue.js';
-import { getJson, launchBrowser, signIn, uniqueCode, type TestBrowser } from '../support/browser.js';
+import { getJson, launchBrowser, screenshot, signIn, uniqueCode, type TestBrowser } from '../support/browser.js';
 
 let browser: TestBrowser;
 
@@ -174,6 +174,7 @@ describe('a reliability engineer on a desktop', () => {
 
     // ── The override: which check, why, and when to look again ────────────────────────────────
     const override = install.getByRole('group', { name: 'Override the failed checks' });
+    await screenshot(page, 'desktop-install-refused', { fullPage: false });
     expect(await override.getByRole('checkbox', { name: 'Bend radius' }).isChecked()).toBe(true);
     const reason = 'The guard rail forces the bend; a wider hose port is on order and the hose is inspected weekly until it is fitted.';
     const reviewOn = daysFromNow(45);

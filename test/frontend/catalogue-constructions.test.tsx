@@ -37,7 +37,7 @@ describe('construction page', () => {
 
     const oilMist = rowOf(table, 'Compressed air with compressor oil mist');
     expect(within(oilMist).getByText('Suitable')).toBeTruthy();
-    expect(within(oilMist).getByText('REFERENCES: RMA IP-2 / compound facts: NBR is oil and fuel resistant')).toBeTruthy();
+    expect(within(oilMist).getByText('common practice (general properties of the elastomer): NBR is oil and fuel resistant')).toBeTruthy();
     expect(within(oilMist).queryByText(CONFIRM_WITH_MAKER)).toBeNull();
 
     const water = rowOf(table, 'Water');

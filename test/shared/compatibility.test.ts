@@ -31,7 +31,7 @@ describe('the compatibility table', () => {
       expect(cell, where).toBeDefined();
       expect(['suitable', 'limited', 'unsuitable'], where).toContain(cell!.rating);
       expect(cell!.source.trim().length, where).toBeGreaterThan(0);
-      const isCitation = cell!.source.startsWith('REFERENCES: RMA IP-2 / compound facts: ');
+      const isCitation = cell!.source.startsWith('common practice (general properties of the elastomer): ');
       expect(isCitation || cell!.source === COMMON_PRACTICE || cell!.source === FROM_MEMORY, where).toBe(true);
     }
   });
@@ -55,30 +55,30 @@ describe('the compatibility table', () => {
     expect(mediumLabel(mediumByCode('saturated-steam')!)).toBe('saturated steam, up to 180 °C');
   });
 
-  it('REFERENCES compound facts: NBR is oil and fuel resistant', () => {
+  it('common practice, general elastomer properties: NBR is oil and fuel resistant', () => {
     for (const medium of ['hydraulic-oil-mineral', 'diesel-fuel', 'gasoline']) {
       expect(compatibilityCell('NBR', medium)).toEqual({ rating: 'suitable', source: expect.stringMatching(/NBR is oil and fuel resistant/) });
     }
   });
 
-  it('REFERENCES compound facts: EPDM is not for petroleum oils; NR, SBR and CIIR are not oil resistant', () => {
+  it('common practice, general elastomer properties: EPDM is not for petroleum oils; NR, SBR and CIIR are not oil resistant', () => {
     for (const compound of ['EPDM', 'NR', 'SBR', 'CIIR']) {
       for (const medium of ['hydraulic-oil-mineral', 'diesel-fuel', 'gasoline']) {
         const cell = compatibilityCell(compound, medium);
         expect(cell?.rating, `${compound} × ${medium}`).toBe('unsuitable');
-        expect(cell?.source, `${compound} × ${medium}`).toMatch(/^REFERENCES: RMA IP-2 \/ compound facts/);
+        expect(cell?.source, `${compound} × ${medium}`).toMatch(/^common practice \(general properties/);
       }
     }
   });
 
-  it('REFERENCES compound facts: CIIR good with acids and alkalis; NR and SBR abrasion resistant', () => {
+  it('common practice, general elastomer properties: CIIR good with acids and alkalis; NR and SBR abrasion resistant', () => {
     expect(compatibilityCell('CIIR', 'sulfuric-acid-10-50')?.source).toMatch(/good with acids and alkalis/);
     expect(compatibilityCell('CIIR', 'sodium-hydroxide-up-to-20')?.rating).toBe('suitable');
     expect(compatibilityCell('NR', 'sand-gravel-dry')?.source).toMatch(/highest abrasion resistance/);
     expect(compatibilityCell('SBR', 'limestone-slurry')?.source).toMatch(/good abrasion resistance/);
   });
 
-  it('REFERENCES compound facts: XLPE and UHMWPE broad chemical resistance is common practice', () => {
+  it('common practice, general elastomer properties: XLPE and UHMWPE broad chemical resistance is common practice', () => {
     for (const compound of ['XLPE', 'UHMWPE']) {
       for (const medium of ['sulfuric-acid-10-50', 'hydrochloric-acid-up-to-37', 'sodium-hydroxide-up-to-20']) {
         expect(compatibilityCell(compound, medium)).toEqual({ rating: 'suitable', source: COMMON_PRACTICE });
@@ -92,7 +92,7 @@ describe('compatibility lookup', () => {
     const answer = compatibility('NBR', 'diesel-fuel');
     expect(answer.outcome).toBe('pass');
     expect(answer.rating).toBe('suitable');
-    expect(answer.source).toMatch(/compound facts/);
+    expect(answer.source).toMatch(/general properties of the elastomer/);
     expect(answer.sentence).toBe('The NBR tube is suitable for diesel fuel, up to 60 °C.');
   });
 

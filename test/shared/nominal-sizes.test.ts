@@ -11,14 +11,14 @@ import {
 const code = (text: string) => findSizeClass(text)?.code ?? null;
 
 describe('the size class table', () => {
-  it('REFERENCES Sizes: dash −12 = 3/4 in = 19.05 mm, and nominal 19 mm is the 3/4-inch class', () => {
+  it('ISO 1307 and dash numbers: dash −12 = 3/4 in = 19.05 mm, and nominal 19 mm is the 3/4-inch class', () => {
     const size = sizeClassByCode('bore-19');
     expect(size?.dash).toBe(12);
     expect(size?.inch).toBe('3/4');
     expect(inchBoreMm(size!)).toBeCloseTo(19.05, 12);
   });
 
-  it('REFERENCES Sizes: holds every ISO 1307 nominal bore 6.3 … 150 mm', () => {
+  it('ISO 1307 and dash numbers: holds every ISO 1307 nominal bore 6.3 … 150 mm', () => {
     const bores = SIZE_CLASSES.map((s) => s.nominalBoreMm);
     for (const mm of [6.3, 8, 10, 12.5, 16, 19, 25, 31.5, 38, 51, 63, 76, 102, 152]) expect(bores).toContain(mm);
     expect(findSizeClass('50 mm')?.code).toBe('bore-51');
@@ -31,7 +31,7 @@ describe('the size class table', () => {
     expect(new Set(SIZE_CLASSES.map((s) => s.dash)).size).toBe(SIZE_CLASSES.length);
   });
 
-  it('dash number = sixteenths of an inch: each inch fraction equals dash/16 (REFERENCES Sizes)', () => {
+  it('dash number = sixteenths of an inch: each inch fraction equals dash/16 (common practice)', () => {
     for (const size of SIZE_CLASSES) {
       expect(findSizeClass(`${size.inch} in`)?.code).toBe(size.code);
       expect(findSizeClass(`-${size.dash}`)?.code).toBe(size.code);
@@ -99,13 +99,13 @@ describe('findSizeClass reads every written form of one class', () => {
 });
 
 describe('sameSizeClass', () => {
-  it('REFERENCES Sizes: 19 mm, 3/4 in and -12 are one class', () => {
+  it('ISO 1307 and dash numbers: 19 mm, 3/4 in and -12 are one class', () => {
     expect(sameSizeClass('19 mm', '3/4 in')).toBe(true);
     expect(sameSizeClass('-12', '19')).toBe(true);
     expect(sameSizeClass('bore-19', '0.75"')).toBe(true);
   });
 
-  it('50 and 51 mm are one class (REFERENCES Sizes: 50/51)', () => {
+  it('50 and 51 mm are one class (ISO 1307: 50/51)', () => {
     expect(sameSizeClass('50', '51 mm')).toBe(true);
   });
 

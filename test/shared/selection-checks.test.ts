@@ -251,13 +251,13 @@ describe('temperature range', () => {
 });
 
 describe('tube compound against medium', () => {
-  it('passes a sourced suitable pairing (REFERENCES compound facts: NBR oil resistant)', () => {
+  it('passes a sourced suitable pairing (common practice, general elastomer properties: NBR oil resistant)', () => {
     const r = checkMediumCompatibility(passingInput());
     expect(r.outcome).toBe('pass');
-    expect(r.source[0]?.title).toMatch(/compound facts/);
+    expect(r.source[0]?.title).toMatch(/general properties of the elastomer/);
   });
 
-  it('fails a sourced unsuitable pairing (REFERENCES compound facts: EPDM not for petroleum oils)', () => {
+  it('fails a sourced unsuitable pairing (common practice, general elastomer properties: EPDM not for petroleum oils)', () => {
     const r = checkMediumCompatibility(inputWith({ construction: { tubeCompound: 'EPDM' }, position: { mediumCode: 'diesel-fuel' } }));
     expect(r.outcome).toBe('fail');
     expect(r.overridable).toBe(true);
@@ -344,7 +344,7 @@ describe('bend radius (ARPM: measured to the innermost surface of the bend)', ()
   });
 });
 
-describe('size classes (REFERENCES Sizes: 19 mm, 3/4 in and -12 are one class)', () => {
+describe('size classes (ISO 1307 and dash numbers: 19 mm, 3/4 in and -12 are one class)', () => {
   it('passes when hose, position and fittings are one class, however written', () => {
     const r = checkSizeClass(inputWith({ fittings: { endA: { sizeCode: '-12', ratingKpa: psi(300) } } }), { lengthUnit: 'in' });
     expect(r.outcome).toBe('pass');

@@ -75,7 +75,7 @@ describe('length conversions', () => {
     expect(fromMm(25.4, 'in')).toBe(1);
   });
 
-  it('REFERENCES Sizes: 3/4 in = 19.05 mm, both ways', () => {
+  it('ISO 1307 and dash numbers: 3/4 in = 19.05 mm, both ways', () => {
     expect(toMm(0.75, 'in')).toBeCloseTo(19.05, 12);
     expect(fromMm(19.05, 'in')).toBeCloseTo(0.75, 12);
   });

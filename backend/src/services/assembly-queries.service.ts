@@ -139,7 +139,8 @@ export async function eventsWhere(ctx: AppContext, where: string, params: unknow
        LEFT JOIN positions p ON p.id = ev.position_id
        LEFT JOIN assembly_events v ON v.voids_event_id = ev.id
       WHERE ${where}
-      ORDER BY ev.occurred_at DESC, ev.recorded_at DESC`,
+      ORDER BY ev.occurred_at DESC, ev.recorded_at DESC,
+               array_position(ARRAY['void','note','inspection','scrap','return_to_stock','remove','tag_out','override','install','proof_test','build']::text[], ev.kind), ev.id`,
     params,
   );
   return rows.map((r: Record<string, any>) => ({

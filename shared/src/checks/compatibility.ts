@@ -88,8 +88,9 @@ export interface CompatibilityCell {
   source: string;
 }
 
-// The compound facts as REFERENCES gives them (RMA IP-2 and the compound descriptions there).
-const FACTS = 'REFERENCES: RMA IP-2 / compound facts';
+// The general properties of the common elastomers, as the trade states them; a plant confirms
+// them against its hose maker's chemical resistance data.
+const FACTS = 'common practice (general properties of the elastomer)';
 const NBR_OIL = `${FACTS}: NBR is oil and fuel resistant`;
 const EPDM_NO_OIL = `${FACTS}: EPDM is not for petroleum oils`;
 const NR_NO_OIL = `${FACTS}: natural rubber is not oil resistant`;

@@ -18,6 +18,21 @@ export const SELECTION_CHECK_CODES = [
 ] as const;
 export type SelectionCheckCode = (typeof SELECTION_CHECK_CODES)[number];
 
+/** Each check's name as people read it. */
+export const SELECTION_CHECK_LABELS: Record<SelectionCheckCode, string> = {
+  'allowable-pressure': 'Allowable pressure',
+  'temperature-range': 'Temperature range',
+  'medium-compatibility': 'Tube and medium',
+  'vacuum-rating': 'Vacuum rating',
+  'bend-radius': 'Bend radius',
+  'size-class': 'Size',
+  conductivity: 'Conductivity',
+  'food-contact': 'Food contact',
+  'proof-test': 'Proof test',
+  'shelf-life': 'Shelf and storage life',
+  'service-life': 'Service life',
+};
+
 /** Where a check's rule comes from: a published text and its section, a design rule, or common practice. */
 export interface CheckSource {
   title: string;

@@ -17,7 +17,7 @@ export interface SizeClass {
   source: string;
 }
 
-const ISO_1307 = 'ISO 1307 nominal bores; dash number = sixteenths of an inch (REFERENCES: Sizes)';
+const ISO_1307 = 'ISO 1307 nominal bores; dash number = sixteenths of an inch (common practice)';
 const LARGE_BORE = 'common practice (larger industrial bores); dash number = sixteenths of an inch';
 
 function sizeClass(nominalBoreMm: number, inch: string, dash: number, alsoWrittenMm: number[] = [], source = ISO_1307): SizeClass {

@@ -1,21 +1,9 @@
-import type { CheckOutcome, SelectionCheckCode } from '@shared/checks/types';
+import { SELECTION_CHECK_LABELS, type CheckOutcome, type SelectionCheckCode } from '@shared/checks/types';
 import type { EventKind, ProofTestMedium } from '@shared/schemas/assemblies.schema';
 import { REMOVAL_REASON_DEFINITIONS, type RemovalReason } from '@shared/services/removal-reasons';
 import type { BadgeTone } from '@/components/ui/badge';
 
-export const CHECK_LABELS: Record<SelectionCheckCode, string> = {
-  'allowable-pressure': 'Allowable pressure',
-  'temperature-range': 'Temperature range',
-  'medium-compatibility': 'Tube and medium',
-  'vacuum-rating': 'Vacuum rating',
-  'bend-radius': 'Bend radius',
-  'size-class': 'Size',
-  conductivity: 'Conductivity',
-  'food-contact': 'Food contact',
-  'proof-test': 'Proof test',
-  'shelf-life': 'Shelf and storage life',
-  'service-life': 'Service life',
-};
+export const CHECK_LABELS = SELECTION_CHECK_LABELS;
 
 export const checkLabel = (code: string) => CHECK_LABELS[code as SelectionCheckCode] ?? code;
 

@@ -1,3 +1,4 @@
+import { SELECTION_CHECK_LABELS, type SelectionCheckCode } from '@shared/checks/types';
 import { Link } from 'react-router-dom';
 import type { CheckOutcome, CheckResult } from '@shared/checks/types';
 import type { PositionDto } from '@shared/schemas/register.schema';
@@ -103,7 +104,7 @@ function InstalledAssembly({ id, number, status, outcome, recomputedSince }: { i
               <ul className="mt-1 flex flex-col gap-1">
                 {assembly.data.overrides.map((o) => (
                   <li key={o.id} className="text-ink-900">
-                    <span className="font-semibold">{o.checkCode}</span>: {o.reason}
+                    <span className="font-semibold">{SELECTION_CHECK_LABELS[o.checkCode as SelectionCheckCode] ?? o.checkCode}</span>: {o.reason}
                     <span className="text-ink-700">
                       {' '}
                       — {o.actorName ?? 'someone'}, review by {formatDate(o.reviewOn)}
