@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { useForm } from 'react-hook-form';
 import type { CheckResult, SelectionCheckCode } from '@shared/checks/types';
 import { overrideInputSchema, type OverrideInput } from '@shared/schemas/assemblies.schema';
@@ -43,8 +44,13 @@ interface ChecksRefusalProps {
  */
 export function ChecksRefusal({ refusal, message, canOverride, onOverride, overriding, overrideLabel }: ChecksRefusalProps) {
   const fails = refusal.results.filter((r) => r.outcome === 'fail');
+  const box = useRef<HTMLDivElement>(null);
+  // The refusal arrives below the form: bring it, and the way past it, into view.
+  useEffect(() => {
+    box.current?.scrollIntoView?.({ block: 'start', behavior: 'smooth' });
+  }, [refusal]);
   return (
-    <div className="flex flex-col gap-4" data-testid="checks-refusal">
+    <div ref={box} className="flex flex-col gap-4" data-testid="checks-refusal">
       <Alert tone="danger" title={`The selection checks refused it: ${fails.length === 1 ? 'one check fails' : `${fails.length} checks fail`}`}>
         {fails.length ? <CheckResultList results={fails} showSources={false} className="mt-2" /> : <p>{message}</p>}
       </Alert>
