@@ -344,3 +344,26 @@ describe('how removals count in life data', () => {
     }
   });
 });
+
+describe('inspection due filters', () => {
+  it('keeps overdue assemblies apart from those due within the coming days', async () => {
+    const today = new Date().toISOString().slice(0, 10);
+    const day = (offset: number) => new Date(Date.parse(`${today}T00:00:00Z`) + offset * 86_400_000).toISOString().slice(0, 10);
+    const ids: Record<string, string> = {};
+    for (const [name, offset] of [['overdue', -3], ['soon', 3], ['later', 20]] as const) {
+      const position = await buildAirPosition(server.ctx, equipment);
+      const id = await stock();
+      await install(id, position.id).expect(200);
+      await server.ctx.ds.query(`UPDATE assemblies SET next_inspection_due = $2 WHERE id = $1`, [id, day(offset)]);
+      ids[name] = id;
+    }
+    const found = async (due: string) =>
+      new Set(((await call(server.app, 'get', '/api/assemblies', technician).query({ due, pageSize: 200 })).body.data as Array<{ id: string }>).map((a) => a.id));
+    const overdue = await found('overdue');
+    const week = await found('within-7-days');
+    const month = await found('within-30-days');
+    expect([overdue.has(ids.overdue!), overdue.has(ids.soon!), overdue.has(ids.later!)]).toEqual([true, false, false]);
+    expect([week.has(ids.overdue!), week.has(ids.soon!), week.has(ids.later!)]).toEqual([false, true, false]);
+    expect([month.has(ids.overdue!), month.has(ids.soon!), month.has(ids.later!)]).toEqual([false, true, true]);
+  });
+});

@@ -94,7 +94,12 @@ export function registerWhere(actor: Actor, query: Omit<AssemblyListQuery, 'page
   if (query.due) {
     const days = query.due === 'overdue' ? 0 : query.due === 'within-7-days' ? 7 : 30;
     const limit = new Date(new Date(`${today}T00:00:00Z`).getTime() + days * 86_400_000).toISOString().slice(0, 10);
-    add((n) => (days === 0 ? `a.next_inspection_due < ${n}::date` : `a.next_inspection_due <= ${n}::date`), limit);
+    // Overdue is before today; "within N days" is from today to N days on, overdue ones apart.
+    if (days === 0) add((n) => `a.next_inspection_due < ${n}::date`, limit);
+    else {
+      add((n) => `a.next_inspection_due >= ${n}::date`, today);
+      add((n) => `a.next_inspection_due <= ${n}::date`, limit);
+    }
   }
   if (query.q) {
     const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;

@@ -24,8 +24,8 @@ export type RenderPlaceFilters = (props: PlaceFilterProps) => ReactNode;
 
 export const DUE_LABELS: Record<(typeof DUE_FILTERS)[number], string> = {
   overdue: 'Overdue',
-  'within-7-days': 'Due within 7 days, or overdue',
-  'within-30-days': 'Due within 30 days, or overdue',
+  'within-7-days': 'Due within 7 days',
+  'within-30-days': 'Due within 30 days',
 };
 
 const OUTCOME_OPTIONS = (['fail', 'warn', 'pass'] as const).map((value) => ({ value, label: CHECK_OUTCOME_LABELS[value] }));
