@@ -367,3 +367,19 @@ describe('inspection due filters', () => {
     expect([month.has(ids.overdue!), month.has(ids.soon!), month.has(ids.later!)]).toEqual([false, true, true]);
   });
 });
+
+describe('check sentences', () => {
+  it('speak in the reader’s own units', async () => {
+    const position = await buildAirPosition(server.ctx, equipment);
+    const id = await stock();
+    await install(id, position.id).expect(200);
+    const reader = await buildUser(server.ctx, { role: 'viewer', allSites: false, siteIds: [site.id], preferences: { pressureUnit: 'psi', lengthUnit: 'in', temperatureUnit: 'F' } });
+    const cookie = await signIn(server.app, reader.email);
+    const results = (await call(server.app, 'get', `/api/assemblies/${id}`, cookie)).body.data.checkResults as Array<{ check: string; sentence: string }>;
+    const pressure = results.find((r) => r.check === 'allowable-pressure')!.sentence;
+    // 2000 kPa = 290 psi (NIST SP 811: 1 psi = 6.894757 kPa); 700 kPa = 102 psi.
+    expect(pressure).toMatch(/290 psi/);
+    expect(pressure).not.toMatch(/bar/);
+    expect(results.find((r) => r.check === 'temperature-range')!.sentence).toMatch(/°F/);
+  });
+});

@@ -4,7 +4,9 @@ import type { AppContext } from '../context.js';
 import { Assembly, Construction, FittingType, Position } from '../entities/index.js';
 import { NotFoundError } from '../errors.js';
 import type { Actor } from '../policies/actor.js';
-import { allowablePressureKpa, loadCheckContext } from '../services/assembly-checks.service.js';
+import { allowablePressureKpa, checkInput, loadCheckContext } from '../services/assembly-checks.service.js';
+import { runSelectionChecks } from '../../../shared/src/checks/selection-checks.js';
+import { DEFAULT_PREFERENCES } from '../../../shared/src/schemas/auth.schema.js';
 import { overridesOf, presentListRow, registerWhere } from '../services/assembly-queries.service.js';
 
 function abilities(actor: Actor, a: Assembly): AssemblyAbilities {
@@ -65,9 +67,20 @@ export async function presentAssembly(ctx: AppContext, actor: Actor, id: string)
   const fittings = ids.length ? await ctx.ds.getRepository(FittingType).findBy(ids.map((fid) => ({ id: fid }))) : [];
   const fitting = (fid: string | null) => fittings.find((f) => f.id === fid) ?? null;
   let allowable: number | null;
+  let checkResults = assembly.checkResults;
   if (assembly.positionId) {
     const position = await ctx.ds.getRepository(Position).findOneByOrFail({ id: assembly.positionId });
-    allowable = allowablePressureKpa(await loadCheckContext(ctx.ds.manager, assembly, position));
+    const context = await loadCheckContext(ctx.ds.manager, assembly, position);
+    allowable = allowablePressureKpa(context);
+    // The same checks as stored, with their sentences in the reader's own units.
+    const [me] = await ctx.ds.query(`SELECT preferences FROM users WHERE id = $1`, [actor.id]);
+    const units = { ...DEFAULT_PREFERENCES, ...(me?.preferences ?? {}) };
+    checkResults = runSelectionChecks(checkInput(context), {
+      now: ctx.clock.now(),
+      pressureUnit: units.pressureUnit,
+      lengthUnit: units.lengthUnit,
+      temperatureUnit: units.temperatureUnit,
+    }).results;
   } else {
     const limits = [construction.workingPressureKpa, ...[assembly.endAFittingTypeId, assembly.endBFittingTypeId].filter(Boolean).map((fid) => fitting(fid)?.sizes.find((s) => s.sizeCode === construction.sizeCode)?.ratingKpa ?? null)];
     allowable = limits.some((l) => l == null) ? null : Math.min(...(limits as number[]));
@@ -89,7 +102,7 @@ export async function presentAssembly(ctx: AppContext, actor: Actor, id: string)
     predatesRecords: assembly.predatesRecords,
     proofTest: assembly.proofTest,
     allowablePressureKpa: allowable,
-    checkResults: assembly.checkResults,
+    checkResults,
     overrides: await overridesOf(ctx, assembly.id, assembly.positionId),
     lastInspectedAt: assembly.lastInspectedAt?.toISOString() ?? null,
     notes: assembly.notes,
