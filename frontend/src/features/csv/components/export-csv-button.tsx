@@ -1,7 +1,7 @@
 import { describeError } from '@/lib/api-client';
 import { hasAbility, useCurrentUser } from '@/lib/auth';
 import { Button, type ButtonVariant } from '@/components/ui/button';
-import { DownloadIcon } from '@/components/ui/csv-icons';
+import { DownloadIcon } from '@/components/ui/icons';
 import { useToast } from '@/components/ui/toast';
 import { useDownloadAssemblyExport } from '../api/export-assemblies';
 

@@ -3,7 +3,7 @@ import { mediumByCode, mediumLabel } from '@shared/checks/compatibility';
 import { serviceByCode } from '@shared/services/service-catalogue';
 import { buttonClasses } from '@/components/ui/button';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
-import { DownloadIcon } from '@/components/ui/csv-icons';
+import { DownloadIcon } from '@/components/ui/icons';
 import { formatBytes } from './import-values';
 
 const UNIT_LIST: Record<'pressure' | 'length' | 'temperature', string> = {

@@ -6,7 +6,7 @@ import { applyServerError } from '@/lib/form-errors';
 import { cn } from '@/lib/cn';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { SheetIcon } from '@/components/ui/csv-icons';
+import { SheetIcon } from '@/components/ui/icons';
 import { ErrorState } from '@/components/ui/error-state';
 import { FieldError, SelectField } from '@/components/ui/field';
 import { UploadIcon } from '@/components/ui/icons';
