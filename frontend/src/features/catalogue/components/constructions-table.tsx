@@ -2,12 +2,7 @@ import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import {
   createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  useReactTable,
-  type SortingState,
   type Table as TanStackTable,
-  type Updater,
 } from '@tanstack/react-table';
 import type { Preferences } from '@shared/schemas/auth.schema';
 import { constructionListQuerySchema, type ConstructionDto, type ConstructionListQuery } from '@shared/schemas/register.schema';
@@ -16,7 +11,7 @@ import { formatPressure, formatTemperature, NO_VALUE } from '@shared/units/units
 import { paths } from '@/config/paths';
 import { Badge } from '@/components/ui/badge';
 import { SelectField } from '@/components/ui/field';
-import { SortableTh, TBody, Td, Th, THead, Table, Tr } from '@/components/ui/table';
+import { ServerTable, useServerTable } from '@/components/ui/server-table';
 import { useUnits } from '../hooks/use-units';
 import { labelOf, REINFORCEMENT_LABELS } from '../utils/labels';
 
@@ -81,32 +76,7 @@ interface ConstructionsTableOptions {
 export function useConstructionsTable({ constructions, total, query, onQueryChange }: ConstructionsTableOptions) {
   const units = useUnits();
   const columns = useMemo(() => columnsFor(units), [units]);
-  const sorting: SortingState = useMemo(() => [{ id: query.sort, desc: query.dir === 'desc' }], [query.sort, query.dir]);
-  const pagination = useMemo(() => ({ pageIndex: query.page - 1, pageSize: query.pageSize }), [query.page, query.pageSize]);
-
-  return useReactTable({
-    data: constructions,
-    columns,
-    getRowId: (row) => row.id,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    manualFiltering: true,
-    enableMultiSort: false,
-    enableSortingRemoval: false,
-    sortDescFirst: false,
-    rowCount: total,
-    state: { sorting, pagination },
-    onSortingChange: (updater: Updater<SortingState>) => {
-      const next = typeof updater === 'function' ? updater(sorting) : updater;
-      const first = next[0];
-      if (first && isSort(first.id)) onQueryChange({ sort: first.id, dir: first.desc ? 'desc' : 'asc' });
-    },
-    onPaginationChange: (updater) => {
-      const next = typeof updater === 'function' ? updater(pagination) : updater;
-      onQueryChange({ page: next.pageIndex + 1, pageSize: next.pageSize });
-    },
-  });
+  return useServerTable({ data: constructions, columns, total, query, onQueryChange, isSort: isSort, getRowId: (row) => row.id });
 }
 
 /** A desktop table of constructions; on a phone the same rows show as cards. */
@@ -114,33 +84,7 @@ export function ConstructionsTable({ table, busy }: { table: TanStackTable<Const
   return (
     <>
       <div className="hidden md:block" aria-busy={busy || undefined}>
-        <Table aria-label="Hose constructions">
-          <THead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const content = flexRender(header.column.columnDef.header, header.getContext());
-                  return header.column.getCanSort() && isSort(header.column.id) ? (
-                    <SortableTh key={header.id} direction={header.column.getIsSorted()} onSort={() => header.column.toggleSorting(undefined, false)}>
-                      {content}
-                    </SortableTh>
-                  ) : (
-                    <Th key={header.id}>{content}</Th>
-                  );
-                })}
-              </tr>
-            ))}
-          </THead>
-          <TBody>
-            {table.getRowModel().rows.map((row) => (
-              <Tr key={row.id}>
-                {row.getVisibleCells().map((cell) => (
-                  <Td key={cell.id}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</Td>
-                ))}
-              </Tr>
-            ))}
-          </TBody>
-        </Table>
+        <ServerTable table={table} label="Hose constructions" isSortable={isSort} />
       </div>
       <ConstructionCards table={table} busy={busy} />
     </>

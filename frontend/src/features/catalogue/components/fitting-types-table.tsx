@@ -2,12 +2,7 @@ import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import {
   createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  useReactTable,
-  type SortingState,
   type Table as TanStackTable,
-  type Updater,
 } from '@tanstack/react-table';
 import type { LengthUnit } from '@shared/schemas/auth.schema';
 import { FITTING_STYLE_LABELS, fittingTypeListQuerySchema, type FittingTypeDto, type FittingTypeListQuery } from '@shared/schemas/register.schema';
@@ -15,7 +10,7 @@ import { SIZE_CLASS_CODES, sizeLabel } from '@shared/sizes/nominal-sizes';
 import { paths } from '@/config/paths';
 import { Badge } from '@/components/ui/badge';
 import { SelectField } from '@/components/ui/field';
-import { SortableTh, TBody, Td, Th, THead, Table, Tr } from '@/components/ui/table';
+import { ServerTable, useServerTable } from '@/components/ui/server-table';
 import { useUnits } from '../hooks/use-units';
 
 type FittingSort = FittingTypeListQuery['sort'];
@@ -64,32 +59,7 @@ interface FittingTypesTableOptions {
 export function useFittingTypesTable({ fittingTypes, total, query, onQueryChange }: FittingTypesTableOptions) {
   const units = useUnits();
   const columns = useMemo(() => columnsFor(units.lengthUnit), [units.lengthUnit]);
-  const sorting: SortingState = useMemo(() => [{ id: query.sort, desc: query.dir === 'desc' }], [query.sort, query.dir]);
-  const pagination = useMemo(() => ({ pageIndex: query.page - 1, pageSize: query.pageSize }), [query.page, query.pageSize]);
-
-  return useReactTable({
-    data: fittingTypes,
-    columns,
-    getRowId: (row) => row.id,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    manualFiltering: true,
-    enableMultiSort: false,
-    enableSortingRemoval: false,
-    sortDescFirst: false,
-    rowCount: total,
-    state: { sorting, pagination },
-    onSortingChange: (updater: Updater<SortingState>) => {
-      const next = typeof updater === 'function' ? updater(sorting) : updater;
-      const first = next[0];
-      if (first && isSort(first.id)) onQueryChange({ sort: first.id, dir: first.desc ? 'desc' : 'asc' });
-    },
-    onPaginationChange: (updater) => {
-      const next = typeof updater === 'function' ? updater(pagination) : updater;
-      onQueryChange({ page: next.pageIndex + 1, pageSize: next.pageSize });
-    },
-  });
+  return useServerTable({ data: fittingTypes, columns, total, query, onQueryChange, isSort: isSort, getRowId: (row) => row.id });
 }
 
 /** A desktop table of fitting types; cards on a phone. */
@@ -100,33 +70,7 @@ export function FittingTypesTable({ table, busy }: { table: TanStackTable<Fittin
   return (
     <>
       <div className="hidden md:block" aria-busy={busy || undefined}>
-        <Table aria-label="Fitting types">
-          <THead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const content = flexRender(header.column.columnDef.header, header.getContext());
-                  return header.column.getCanSort() && isSort(header.column.id) ? (
-                    <SortableTh key={header.id} direction={header.column.getIsSorted()} onSort={() => header.column.toggleSorting(undefined, false)}>
-                      {content}
-                    </SortableTh>
-                  ) : (
-                    <Th key={header.id}>{content}</Th>
-                  );
-                })}
-              </tr>
-            ))}
-          </THead>
-          <TBody>
-            {table.getRowModel().rows.map((row) => (
-              <Tr key={row.id}>
-                {row.getVisibleCells().map((cell) => (
-                  <Td key={cell.id}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</Td>
-                ))}
-              </Tr>
-            ))}
-          </TBody>
-        </Table>
+        <ServerTable table={table} label="Fitting types" isSortable={isSort} />
       </div>
       <div className="flex flex-col gap-3 md:hidden">
         <SelectField

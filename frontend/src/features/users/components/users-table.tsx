@@ -1,20 +1,14 @@
-import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import {
   createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  useReactTable,
-  type SortingState,
   type Table as TanStackTable,
-  type Updater,
 } from '@tanstack/react-table';
 import { ROLE_LABELS } from '@shared/roles';
 import { USER_SORTS, type UserDto, type UserListQuery } from '@shared/schemas/users.schema';
 import { paths } from '@/config/paths';
 import { formatDate, formatDateTime, formatDay } from '@/lib/format';
 import { SelectField } from '@/components/ui/field';
-import { SortableTh, TBody, Td, Th, THead, Table, Tr } from '@/components/ui/table';
+import { ServerTable, useServerTable } from '@/components/ui/server-table';
 import { describeUserSites } from './user-labels';
 import { UserStatusBadge } from './user-status-badge';
 
@@ -70,32 +64,7 @@ interface UsersTableOptions {
 
 /** The table's state is the address's: sorting and paging happen on the server. */
 export function useUsersTable({ users, total, query, onQueryChange }: UsersTableOptions) {
-  const sorting: SortingState = useMemo(() => [{ id: query.sort, desc: query.dir === 'desc' }], [query.sort, query.dir]);
-  const pagination = useMemo(() => ({ pageIndex: query.page - 1, pageSize: query.pageSize }), [query.page, query.pageSize]);
-
-  return useReactTable({
-    data: users,
-    columns,
-    getRowId: (row) => row.id,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    manualFiltering: true,
-    enableMultiSort: false,
-    enableSortingRemoval: false,
-    sortDescFirst: false,
-    rowCount: total,
-    state: { sorting, pagination },
-    onSortingChange: (updater: Updater<SortingState>) => {
-      const next = typeof updater === 'function' ? updater(sorting) : updater;
-      const first = next[0];
-      if (first && isUserSort(first.id)) onQueryChange({ sort: first.id, dir: first.desc ? 'desc' : 'asc' });
-    },
-    onPaginationChange: (updater) => {
-      const next = typeof updater === 'function' ? updater(pagination) : updater;
-      onQueryChange({ page: next.pageIndex + 1, pageSize: next.pageSize });
-    },
-  });
+  return useServerTable({ data: users, columns, total, query, onQueryChange, isSort: isUserSort, getRowId: (row) => row.id });
 }
 
 /** A desktop table of users; on a phone the same rows show as cards. */
@@ -103,33 +72,7 @@ export function UsersTable({ table, busy }: { table: TanStackTable<UserDto>; bus
   return (
     <>
       <div className="hidden md:block" aria-busy={busy || undefined}>
-        <Table aria-label="Users">
-          <THead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const content = flexRender(header.column.columnDef.header, header.getContext());
-                  return header.column.getCanSort() ? (
-                    <SortableTh key={header.id} direction={header.column.getIsSorted()} onSort={() => header.column.toggleSorting(undefined, false)}>
-                      {content}
-                    </SortableTh>
-                  ) : (
-                    <Th key={header.id}>{content}</Th>
-                  );
-                })}
-              </tr>
-            ))}
-          </THead>
-          <TBody>
-            {table.getRowModel().rows.map((row) => (
-              <Tr key={row.id}>
-                {row.getVisibleCells().map((cell) => (
-                  <Td key={cell.id}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</Td>
-                ))}
-              </Tr>
-            ))}
-          </TBody>
-        </Table>
+        <ServerTable table={table} label="Users" />
       </div>
       <UserCards table={table} busy={busy} />
     </>
