@@ -14,13 +14,19 @@ interface DialogProps {
   /** `alertdialog` for a confirmation that needs an answer. */
   role?: 'dialog' | 'alertdialog';
   size?: 'sm' | 'md' | 'lg';
+  /**
+   * `sheet`: a form that fills a phone's screen, so every field and the main button are large and
+   * nothing behind it can be tapped by mistake; focus starts on the panel, not the first field.
+   */
+  variant?: 'dialog' | 'sheet';
 }
 
 /**
  * A modal panel: focus moves in and stays in, Escape or the close button closes it, and focus
  * returns to what opened it. On a phone it rises from the bottom edge, within thumb reach.
  */
-export function Dialog({ open, onClose, title, description, children, role = 'dialog', size = 'md' }: DialogProps) {
+export function Dialog({ open, onClose, title, description, children, role = 'dialog', size = 'md', variant = 'dialog' }: DialogProps) {
+  const sheet = variant === 'sheet';
   const titleId = useId();
   const descriptionId = useId();
   const panelRef = useRef<HTMLDivElement>(null);
@@ -32,7 +38,8 @@ export function Dialog({ open, onClose, title, description, children, role = 'di
     const opener = document.activeElement instanceof HTMLElement ? document.activeElement : null;
     const panel = panelRef.current;
     const focusables = () => (panel ? Array.from(panel.querySelectorAll<HTMLElement>(FOCUSABLE)) : []);
-    const first = panel?.querySelector<HTMLElement>('[data-autofocus]') ?? focusables().find((el) => !el.dataset.dialogClose) ?? panel;
+    const first =
+      panel?.querySelector<HTMLElement>('[data-autofocus]') ?? (sheet ? null : focusables().find((el) => !el.dataset.dialogClose)) ?? panel;
     first?.focus();
 
     const handleKeyDown = (event: KeyboardEvent) => {
@@ -65,13 +72,13 @@ export function Dialog({ open, onClose, title, description, children, role = 'di
       document.body.style.overflow = overflow;
       opener?.focus();
     };
-  }, [open]);
+  }, [open, sheet]);
 
   if (!open) return null;
 
   return createPortal(
     <div
-      className="fixed inset-0 z-50 flex items-end justify-center bg-ink-950/70 sm:items-center sm:p-6"
+      className={cn('fixed inset-0 z-50 flex justify-center bg-ink-950/70 sm:items-center sm:p-6', sheet ? 'items-stretch' : 'items-end')}
       onMouseDown={(event) => {
         if (event.target === event.currentTarget) onClose();
       }}
@@ -84,13 +91,14 @@ export function Dialog({ open, onClose, title, description, children, role = 'di
         aria-describedby={description ? descriptionId : undefined}
         tabIndex={-1}
         className={cn(
-          'flex max-h-[92dvh] w-full flex-col overflow-hidden rounded-t-[var(--radius-card)] bg-white shadow-2xl sm:rounded-[var(--radius-card)]',
+          'flex w-full flex-col overflow-hidden bg-white shadow-2xl sm:rounded-[var(--radius-card)]',
+          sheet ? 'h-dvh sm:h-auto sm:max-h-[92dvh]' : 'max-h-[92dvh] rounded-t-[var(--radius-card)]',
           size === 'sm' && 'sm:max-w-md',
           size === 'md' && 'sm:max-w-xl',
           size === 'lg' && 'sm:max-w-3xl',
         )}
       >
-        <div className="flex items-start justify-between gap-4 border-b border-ink-200 px-5 py-4">
+        <div className={cn('flex items-start justify-between gap-4 border-b border-ink-200', sheet ? 'px-4 py-3 sm:px-5 sm:py-4' : 'px-5 py-4')}>
           <div className="flex flex-col gap-1 pt-1.5">
             <h2 id={titleId} className="text-xl font-bold text-ink-950">
               {title}
@@ -106,12 +114,12 @@ export function Dialog({ open, onClose, title, description, children, role = 'di
             onClick={onClose}
             aria-label="Close"
             data-dialog-close="true"
-            className="flex size-11 shrink-0 items-center justify-center rounded-[var(--radius-control)] text-ink-700 hover:bg-ink-100"
+            className={cn('flex shrink-0 items-center justify-center rounded-[var(--radius-control)] text-ink-700 hover:bg-ink-100', sheet ? 'size-12' : 'size-11')}
           >
             <CloseIcon />
           </button>
         </div>
-        <div className="overflow-y-auto px-5 py-5">{children}</div>
+        <div className={cn('overflow-y-auto py-5', sheet ? 'flex-1 px-4 sm:px-5' : 'px-5')}>{children}</div>
       </div>
     </div>,
     document.body,
